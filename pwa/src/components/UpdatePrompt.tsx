@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { IonToast } from '@ionic/react';
 import { Workbox } from 'workbox-window';
 
@@ -7,7 +7,7 @@ import { Workbox } from 'workbox-window';
  * The new version never takes over by itself: an inspector may be mid-entry.
  */
 export function UpdatePrompt() {
-  const [workbox, setWorkbox] = useState<Workbox | null>(null);
+  const workbox = useRef<Workbox | null>(null);
   const [waiting, setWaiting] = useState(false);
 
   useEffect(() => {
@@ -18,7 +18,7 @@ export function UpdatePrompt() {
       if (event.isUpdate) window.location.reload();
     });
     void wb.register();
-    setWorkbox(wb);
+    workbox.current = wb;
   }, []);
 
   return (
@@ -28,7 +28,7 @@ export function UpdatePrompt() {
       position="bottom"
       buttons={[
         { text: 'Later', role: 'cancel', handler: () => setWaiting(false) },
-        { text: 'Switch now', handler: () => workbox?.messageSkipWaiting() },
+        { text: 'Switch now', handler: () => workbox.current?.messageSkipWaiting() },
       ]}
     />
   );
