@@ -40,5 +40,14 @@ export default defineConfig({
     port: 5173,
     proxy: { '/api': { target: apiTarget, changeOrigin: false } },
   },
-  build: { sourcemap: true, chunkSizeWarningLimit: 1500 },
+  build: {
+    sourcemap: true,
+    rolldownOptions: {
+      // Ionic's per-component modules only define classes; marking them side-effect free
+      // lets unused components drop out of the bundle (Ionic registers what it renders).
+      treeshake: {
+        moduleSideEffects: (id: string) => !/@ionic[\\/]core[\\/]components[\\/].*\.js$/.test(id),
+      },
+    },
+  },
 });
