@@ -1,0 +1,34 @@
+import { Module, type DynamicModule } from '@nestjs/common';
+import { AuditModule } from './audit/audit.module.js';
+import { AuthModule } from './auth/auth.module.js';
+import { ChangesModule } from './changes/changes.module.js';
+import { CONFIG, type Config } from './config.js';
+import { DatabaseModule } from './database/database.module.js';
+import { HealthModule } from './health/health.module.js';
+import { MailModule } from './mail/mail.module.js';
+import { PhotosModule } from './photos/photos.module.js';
+import { PressesModule } from './presses/presses.module.js';
+import { UsersModule } from './users/users.module.js';
+
+@Module({})
+export class AppModule {
+  static forRoot(config: Config, jwtSecret: string): DynamicModule {
+    return {
+      module: AppModule,
+      global: true,
+      imports: [
+        DatabaseModule.forRoot(config.dataDir),
+        AuditModule,
+        ChangesModule,
+        MailModule,
+        AuthModule.forRoot(jwtSecret),
+        UsersModule,
+        PressesModule,
+        PhotosModule,
+        HealthModule,
+      ],
+      providers: [{ provide: CONFIG, useValue: config }],
+      exports: [CONFIG],
+    };
+  }
+}

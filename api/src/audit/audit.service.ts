@@ -1,0 +1,39 @@
+import { Injectable } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { LessThan, Repository, type EntityManager, type FindOptionsWhere } from 'typeorm';
+import type { AuditQueryDto } from './dto/audit-query.dto.js';
+import { AuditEntry } from './entities/audit-entry.entity.js';
+
+@Injectable()
+export class AuditService {
+  constructor(@InjectRepository(AuditEntry) private readonly entries: Repository<AuditEntry>) {}
+
+  /** Written inside the caller's transaction, so a change and its audit entry stand or fall together. */
+  async record(
+    manager: EntityManager,
+    actorId: string | null,
+    action: string,
+    entity: string,
+    entityId: string,
+    before: object | null,
+    after: object | null,
+  ): Promise<void> {
+    await manager.insert(AuditEntry, {
+      at: new Date(),
+      actorId,
+      action,
+      entity,
+      entityId,
+      before,
+      after,
+    });
+  }
+
+  list({ entity, entityId, before, limit }: AuditQueryDto): Promise<AuditEntry[]> {
+    const where: FindOptionsWhere<AuditEntry> = {};
+    if (entity) where.entity = entity;
+    if (entityId) where.entityId = entityId;
+    if (before) where.id = LessThan(before);
+    return this.entries.find({ where, order: { id: 'DESC' }, take: limit ?? 100 });
+  }
+}

@@ -1,0 +1,47 @@
+import { Column, Entity, Index, ManyToOne, PrimaryColumn, type Relation } from 'typeorm';
+import { Compound } from './compound.entity.js';
+
+export type FitStatus = 'draft' | 'published';
+
+/** A fitted set of constants; immutable once made, so a released spec can point at it for good. */
+@Entity('compound_fits')
+@Index(['compoundId', 'version'], { unique: true })
+export class CompoundFit {
+  @PrimaryColumn({ type: 'varchar', length: 36 })
+  id: string;
+
+  @Column({ type: 'varchar', length: 36 })
+  compoundId: string;
+
+  @ManyToOne(() => Compound)
+  compound?: Relation<Compound>;
+
+  @Column({ type: 'integer' })
+  version: number;
+
+  /** The engine's model shape with the fitted constants. */
+  @Column({ type: 'simple-json' })
+  model: Record<string, unknown>;
+
+  @Column({ type: 'varchar', length: 12 })
+  objective: 'absolute' | 'relative';
+
+  @Column({ type: 'simple-json' })
+  testSetIds: string[];
+
+  /** What the engine reported besides the model: RMS and R² per mode, iterations, stability. */
+  @Column({ type: 'simple-json' })
+  result: Record<string, unknown>;
+
+  @Column({ type: 'varchar', length: 12 })
+  status: FitStatus;
+
+  @Column({ type: 'varchar', length: 36 })
+  createdBy: string;
+
+  @Column({ type: Date })
+  createdAt: Date;
+
+  @Column({ type: Date, nullable: true })
+  publishedAt: Date | null;
+}

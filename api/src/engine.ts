@@ -1,0 +1,1 @@
+export * from '../../pwa/src/engine/index.js';

@@ -1,0 +1,55 @@
+import { Type } from 'class-transformer';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsOptional, ValidateNested } from 'class-validator';
+import { Finite } from '../../common/numbers.js';
+
+/** Plan dimensions as measured, named as in the spec's geometry (mm). */
+export class DimensionsDto {
+  @IsOptional()
+  @Finite(0.1, 3000)
+  diameter?: number;
+
+  @IsOptional()
+  @Finite(0.1, 3000)
+  outerDiameter?: number;
+
+  @IsOptional()
+  @Finite(0.1, 3000)
+  innerDiameter?: number;
+
+  @IsOptional()
+  @Finite(0.1, 3000)
+  side?: number;
+
+  @IsOptional()
+  @Finite(0.1, 3000)
+  length?: number;
+
+  @IsOptional()
+  @Finite(0.1, 3000)
+  width?: number;
+}
+
+/** One sampled part's readings; each is optional because a plan may not call for all of them. */
+export class Measurements {
+  @IsOptional()
+  @Finite(0.05, 500)
+  thickness?: number;
+
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => DimensionsDto)
+  dimensions?: DimensionsDto;
+
+  /** Shore A durometer readings: 3 or 5 are usual, the median counts. */
+  @IsOptional()
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(5)
+  @Finite(0, 100, true)
+  hardness?: number[];
+
+  /** N, read at the spec's test deflection. */
+  @IsOptional()
+  @Finite(0, 10_000_000)
+  load?: number;
+}

@@ -1,0 +1,151 @@
+import { randomUUID } from 'node:crypto';
+import { readdir, readFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import {
+  Inject,
+  Injectable,
+  Logger,
+  type OnApplicationBootstrap,
+  type OnModuleDestroy,
+  type OnModuleInit,
+} from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { simpleParser } from 'mailparser';
+import nodemailer, { type Transporter } from 'nodemailer';
+import { IsNull, LessThan, Repository, type EntityManager } from 'typeorm';
+import { CONFIG, type Config } from '../config.js';
+import { OutgoingMail } from './entities/outgoing-mail.entity.js';
+import { FakeSmtp } from './fake-smtp.js';
+
+const FROM = 'Gumshoe <gumshoe@localhost>';
+const MAX_ATTEMPTS = 5;
+
+export interface KeptMessage {
+  id: string;
+  date: string | null;
+  from: string;
+  to: string;
+  subject: string;
+  text: string;
+}
+
+export function mailFolder(dataDir: string): string {
+  return join(dataDir, 'mail');
+}
+
+@Injectable()
+export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModuleDestroy {
+  private readonly logger = new Logger('Mail');
+  private fake: FakeSmtp | undefined;
+  private transport: Transporter | undefined;
+  private sending: Promise<void> = Promise.resolve();
+
+  constructor(
+    @Inject(CONFIG) private readonly config: Config,
+    @InjectRepository(OutgoingMail) private readonly outbox: Repository<OutgoingMail>,
+  ) {}
+
+  async onModuleInit(): Promise<void> {
+    if (this.config.smtpUrl) {
+      this.transport = nodemailer.createTransport(this.config.smtpUrl);
+      return;
+    }
+    this.fake = new FakeSmtp(mailFolder(this.config.dataDir));
+    const port = await this.fake.listen();
+    this.transport = nodemailer.createTransport({
+      host: '127.0.0.1',
+      port,
+      secure: false,
+      ignoreTLS: true,
+    });
+  }
+
+  /** Mail that was queued before a restart goes out now. */
+  onApplicationBootstrap(): void {
+    void this.flush();
+  }
+
+  async onModuleDestroy(): Promise<void> {
+    await this.sending;
+    this.transport?.close();
+    await this.fake?.close();
+  }
+
+  /**
+   * Queues a message inside the caller's transaction. A second message with the same key is
+   * dropped: that is what makes "lot flagged" mail go out once, however often the lot is pushed.
+   */
+  async enqueue(manager: EntityManager, key: string, to: string[], subject: string, text: string) {
+    await manager
+      .createQueryBuilder()
+      .insert()
+      .into(OutgoingMail)
+      .values({
+        id: randomUUID(),
+        dedupeKey: key,
+        to,
+        subject,
+        text,
+        createdAt: new Date(),
+        attempts: 0,
+      })
+      .orIgnore()
+      .execute();
+  }
+
+  /** Sends what is queued; call after the queuing transaction committed. One run at a time. */
+  flush(): Promise<void> {
+    this.sending = this.sending.then(() => this.sendPending());
+    return this.sending;
+  }
+
+  private async sendPending(): Promise<void> {
+    const pending = await this.outbox.find({
+      where: { sentAt: IsNull(), attempts: LessThan(MAX_ATTEMPTS) },
+      order: { createdAt: 'ASC' },
+    });
+    for (const mail of pending) {
+      try {
+        await this.transport?.sendMail({
+          from: FROM,
+          to: mail.to,
+          subject: mail.subject,
+          text: mail.text,
+        });
+        await this.outbox.update(
+          { id: mail.id },
+          { sentAt: new Date(), attempts: mail.attempts + 1 },
+        );
+      } catch (error) {
+        const lastError = String((error as Error).message).slice(0, 500);
+        this.logger.warn(`Could not send "${mail.subject}": ${lastError}`);
+        await this.outbox.update({ id: mail.id }, { attempts: mail.attempts + 1, lastError });
+      }
+    }
+  }
+
+  /** The messages the local mail server kept, newest first. */
+  async kept(): Promise<KeptMessage[]> {
+    const folder = mailFolder(this.config.dataDir);
+    const names = (await readdir(folder))
+      .filter((name) => name.endsWith('.eml'))
+      .sort()
+      .reverse();
+    return Promise.all(
+      names.map(async (name) => {
+        const parsed = await simpleParser(await readFile(join(folder, name)));
+        const to = Array.isArray(parsed.to)
+          ? parsed.to.map((a) => a.text).join(', ')
+          : parsed.to?.text;
+        return {
+          id: name.replace(/\.eml$/, ''),
+          date: parsed.date?.toISOString() ?? null,
+          from: parsed.from?.text ?? '',
+          to: to ?? '',
+          subject: parsed.subject ?? '',
+          text: parsed.text ?? '',
+        };
+      }),
+    );
+  }
+}
