@@ -6,7 +6,9 @@ import {
   isParenthesisNode,
   isSymbolNode,
   parseDependencies,
+  type FunctionNode,
   type MathNode,
+  type SymbolNode,
 } from 'mathjs';
 import { EngineInputError } from './errors.js';
 import type { Scalar } from './scalar.js';
@@ -75,6 +77,16 @@ function symbol(name: string, symbols: Set<string>): Evaluate {
   };
 }
 
+/** A name that is not a function, followed by one parenthesised factor. */
+function isImplicitProduct(node: MathNode): node is FunctionNode<SymbolNode, [MathNode]> {
+  return (
+    isFunctionNode(node) &&
+    isSymbolNode(node.fn) &&
+    !(node.fn.name in FUNCTIONS) &&
+    node.args.length === 1
+  );
+}
+
 function translate(node: MathNode, symbols: Set<string>): Evaluate {
   if (isParenthesisNode(node)) return translate(node.content, symbols);
   if (isConstantNode(node)) {
@@ -84,6 +96,13 @@ function translate(node: MathNode, symbols: Set<string>): Evaluate {
   }
   if (isSymbolNode(node)) return symbol(node.name, symbols);
   if (isOperatorNode(node)) {
+    const [base, exponent] = node.args;
+    if (node.fn === 'pow' && base && exponent && isImplicitProduct(base)) {
+      // `C2 (I1 - 3)^2` parses as (C2(I1 - 3))^2; ordinary notation means C2·(I1 − 3)².
+      const factor = symbol(base.fn.name, symbols);
+      const [x, e] = [translate(base.args[0]!, symbols), translate(exponent, symbols)];
+      return (s) => factor(s).mul(x(s).pow(e(s)));
+    }
     const args = node.args.map((arg) => translate(arg, symbols));
     const [a, b] = args;
     if (node.fn === 'unaryMinus' && a) return (s) => a(s).neg();
@@ -92,16 +111,19 @@ function translate(node: MathNode, symbols: Set<string>): Evaluate {
     if (op && a && b && args.length === 2) return (s) => op(a(s), b(s));
     throw unsupported(`the operator ${node.op}`);
   }
-  if (isFunctionNode(node) && isSymbolNode(node.fn)) {
-    const name = node.fn.name;
-    const args = node.args.map((arg) => translate(arg, symbols));
-    const [a] = args;
-    if (!a || args.length !== 1) throw unsupported(`${name} with ${args.length} arguments`);
-    const f = FUNCTIONS[name];
-    if (f) return (s) => f(a(s));
+  if (isImplicitProduct(node)) {
     // mathjs reads `C01 (I2 - 3)` as a call; in an energy it is a product.
-    const factor = symbol(name, symbols);
-    return (s) => factor(s).mul(a(s));
+    const [factor, x] = [symbol(node.fn.name, symbols), translate(node.args[0]!, symbols)];
+    return (s) => factor(s).mul(x(s));
+  }
+  if (isFunctionNode(node) && isSymbolNode(node.fn)) {
+    const f = FUNCTIONS[node.fn.name];
+    const [arg] = node.args;
+    if (!f || !arg || node.args.length !== 1) {
+      throw unsupported(`${node.fn.name} with ${node.args.length} arguments`);
+    }
+    const x = translate(arg, symbols);
+    return (s) => f(x(s));
   }
   throw unsupported(`a ${node.type.replace(/Node$/, '').toLowerCase()} expression`);
 }
