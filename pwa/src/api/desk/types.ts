@@ -1,15 +1,27 @@
 import type {
   AgingPoint,
+  DimensionKind,
   FitResult,
   MaterialModel,
   Mode,
-  SamplingLevel,
-  Severity,
   ToleranceClass,
-  DimensionKind,
 } from '../../engine';
+import type {
+  Compound,
+  Defect,
+  Disposition,
+  Fit,
+  Inspection,
+  Lot,
+  Press,
+  SpecBody,
+  SpecRevision,
+} from '../types';
 
-/** The plant server's shapes for the desk (api/src/ROUTES.md and .team/desk-api-requests.md). */
+/*
+ * What the desk reads and writes beyond the tablet's shapes (api/src/ROUTES.md plus the fields
+ * asked for in .team/desk-api-requests.md). Each type extends the shared one in ../types.
+ */
 
 export type Polymer = 'NR' | 'EPDM' | 'NBR' | 'CR' | 'FKM' | 'VMQ' | 'SBR' | 'other';
 export const POLYMERS: readonly Polymer[] = [
@@ -23,34 +35,22 @@ export const POLYMERS: readonly Polymer[] = [
   'other',
 ];
 
-export type Objective = 'absolute' | 'relative';
+export type Objective = Fit['objective'];
 export type ModeWeights = Partial<Record<Mode, number>>;
 
-export interface Fit {
-  id: string;
-  compoundId: string;
-  version: number;
-  model: MaterialModel;
-  objective: Objective;
-  weights?: ModeWeights | null;
+export interface FitRecord extends Fit {
   testSetIds: string[];
   result: Omit<FitResult, 'model'>;
-  status: 'draft' | 'published';
+  weights?: ModeWeights | null;
   note?: string | null;
   createdAt?: string;
-  publishedAt: string | null;
 }
 
-export interface Compound {
-  id: string;
-  code: string;
-  name: string;
+export interface CompoundRecord extends Compound {
   polymer: Polymer;
-  hardnessShoreA: number;
   bulkModulusMPa?: number | null;
   notes?: string;
-  currentFitId: string | null;
-  currentFit: Fit | null;
+  currentFit: FitRecord | null;
 }
 
 export interface StressPoint {
@@ -71,9 +71,9 @@ export interface TestSet extends NewTestSet {
   createdAt?: string;
 }
 
-export interface CompoundDetail extends Compound {
+export interface CompoundDetail extends CompoundRecord {
   testSets: TestSet[];
-  fits: Fit[];
+  fits: FitRecord[];
 }
 
 export interface NewCompound {
@@ -83,6 +83,13 @@ export interface NewCompound {
   hardnessShoreA: number;
   bulkModulusMPa?: number;
   notes?: string;
+}
+
+export interface NewFit {
+  model: MaterialModel;
+  testSetIds: string[];
+  objective: Objective;
+  weights?: ModeWeights;
 }
 
 export interface NewAgingSet {
@@ -97,6 +104,7 @@ export interface AgingSet extends NewAgingSet {
   createdAt: string;
 }
 
+/** The geometry fields a tolerance class can be given for. */
 export type DimensionName =
   'thickness' | 'diameter' | 'outerDiameter' | 'innerDiameter' | 'side' | 'length' | 'width';
 
@@ -105,47 +113,32 @@ export interface DimensionTolerance {
   kind: DimensionKind;
 }
 
-export interface SpecBody {
-  geometry: Geometry;
-  bonded: boolean;
-  compoundId: string;
-  testDeflection: number;
-  loadTolerancePercent: number;
+export interface DeskSpecBody extends Omit<SpecBody, 'tolerance'> {
   tolerance: {
     class: ToleranceClass;
     dimensions?: Partial<Record<DimensionName, DimensionTolerance>>;
   };
-  hardness: { nominal: number; tolerance: number };
-  compressionSetLimitPercent?: number;
   compressionSetCondition?: { temperatureC: number; hours: number };
-  sampling: { level: SamplingLevel; aql: number; severity: Severity };
   note?: string;
 }
 
-export interface SpecRevision {
-  id: string;
-  specId: string;
-  revision: number;
-  status: 'draft' | 'released';
-  body: SpecBody;
-  fit: Fit | null;
-  derived: Record<string, unknown> | null;
+export interface DeskSpecRevision extends Omit<SpecRevision, 'body' | 'fit'> {
+  body: DeskSpecBody;
+  fit: FitRecord | null;
   createdAt?: string;
-  releasedAt: string | null;
-  releasedBy: string | null;
 }
 
-export interface Spec {
+export interface DeskSpec {
   id: string;
   partNumber: string;
   name: string;
   description: string;
   currentRevisionId: string | null;
-  currentRevision: SpecRevision | null;
+  currentRevision: DeskSpecRevision | null;
 }
 
-export interface SpecDetail extends Spec {
-  revisions: SpecRevision[];
+export interface DeskSpecDetail extends DeskSpec {
+  revisions: DeskSpecRevision[];
 }
 
 export interface NewSpec {
@@ -170,4 +163,15 @@ export interface MeasurementRow {
   hardness: number | null;
   load: number | null;
   conforming: boolean;
+}
+
+export interface LotReport {
+  lot: Lot;
+  spec: { id: string; partNumber: string; name: string };
+  revision: DeskSpecRevision;
+  press: Press;
+  inspections: Inspection[];
+  defects: Defect[];
+  dispositions: Disposition[];
+  generatedAt: string;
 }
