@@ -34,3 +34,51 @@ export {
   nominalStressOf,
   tangentStiffness,
 } from './stress.js';
+
+// Compression set and aging (REFERENCES §7)
+export { compressionSetPercent, type CompressionSetReading } from './compression-set.js';
+export {
+  GAS_CONSTANT,
+  accelerationFactor,
+  arrheniusFit,
+  arrheniusLife,
+  expectedCompressionSet,
+  highestTemperatureForLife,
+  type AgingPoint,
+  type ArrheniusFit,
+  type LifePrediction,
+} from './arrhenius.js';
+
+// Quality: tolerances, sampling, control charts (REFERENCES §8–§10)
+export { moldedTolerance, type DimensionKind, type ToleranceClass } from './molded-tolerance.js';
+export {
+  PREFERRED_AQLS,
+  acceptOneStepTighter,
+  acceptanceProbability,
+  codeLetterFor,
+  lotDecision,
+  masterTableCell,
+  samplingPlan,
+  type CodeLetter,
+  type InspectionLevel,
+  type InspectionSeverity,
+  type LotDecision,
+  type LotDecisionResult,
+  type MasterTableCell,
+  type SamplingPlan,
+  type SamplingPlanInput,
+} from './sampling.js';
+export {
+  initialSwitchingState,
+  nextSwitchingState,
+  resumeAfterCorrectiveAction,
+  type LotOutcome,
+  type SwitchingState,
+} from './switching-rules.js';
+export { XBAR_R_CONSTANTS, xbarRLimits, type XbarRLimits } from './control-charts.js';
+export {
+  capabilityIndices,
+  type CapabilityIndices,
+  type SpecificationLimits,
+} from './capability.js';
+export { binomialCdf, studentTCdf, studentTTwoSided } from './statistics.js';
