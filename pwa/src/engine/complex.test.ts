@@ -1,4 +1,21 @@
-import { complex, type Complex as MathComplex } from 'mathjs';
+import {
+  add,
+  complex,
+  cos,
+  cosh,
+  coth,
+  divide,
+  exp,
+  log,
+  multiply,
+  pow,
+  sin,
+  sinh,
+  sqrt,
+  subtract,
+  tanh,
+  type Complex as MathComplex,
+} from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { Bicomplex } from './bicomplex.js';
 import { Complex } from './complex.js';
@@ -14,22 +31,23 @@ const a = 1.37;
 const ours = new Complex(a, 0.8 * STEP);
 const full = complex(a, 0.8 * STEP);
 
-const unary: [string, (z: Complex) => Complex, (z: MathComplex) => MathComplex][] = [
-  ['exp', (z) => z.exp(), (z) => z.exp()],
-  ['log', (z) => z.log(), (z) => z.log()],
-  ['sqrt', (z) => z.sqrt(), (z) => z.sqrt() as MathComplex],
-  ['sin', (z) => z.sin(), (z) => z.sin()],
-  ['cos', (z) => z.cos(), (z) => z.cos()],
-  ['sinh', (z) => z.sinh(), (z) => z.sinh()],
-  ['cosh', (z) => z.cosh(), (z) => z.cosh()],
-  ['tanh', (z) => z.tanh(), (z) => z.tanh()],
-  ['coth', (z) => z.coth(), (z) => z.coth()],
-  ['pow 2.7', (z) => z.pow(2.7), (z) => z.pow(2.7)],
-  ['pow −3', (z) => z.pow(-3), (z) => z.pow(-3)],
-  ['pow z', (z) => z.pow(z), (z) => z.pow(z)],
-  ['1/z', (z) => z.constant(1).div(z), (z) => z.inverse()],
-  ['z·(z+2)', (z) => z.mul(z.add(2)), (z) => z.mul(z.add(2))],
-  ['(z−5)/(z+2)', (z) => z.sub(5).div(z.add(2)), (z) => z.sub(5).div(z.add(2))],
+type Full = MathComplex;
+const unary: [string, (z: Complex) => Complex, (z: Full) => Full][] = [
+  ['exp', (z) => z.exp(), (z) => exp(z)],
+  ['log', (z) => z.log(), (z) => log(z)],
+  ['sqrt', (z) => z.sqrt(), (z) => sqrt(z)],
+  ['sin', (z) => z.sin(), (z) => sin(z)],
+  ['cos', (z) => z.cos(), (z) => cos(z)],
+  ['sinh', (z) => z.sinh(), (z) => sinh(z)],
+  ['cosh', (z) => z.cosh(), (z) => cosh(z)],
+  ['tanh', (z) => z.tanh(), (z) => tanh(z)],
+  ['coth', (z) => z.coth(), (z) => coth(z)],
+  ['pow 2.7', (z) => z.pow(2.7), (z) => pow(z, 2.7) as Full],
+  ['pow −3', (z) => z.pow(-3), (z) => pow(z, -3) as Full],
+  ['pow z', (z) => z.pow(z), (z) => pow(z, z) as Full],
+  ['1/z', (z) => z.constant(1).div(z), (z) => divide(1, z) as Full],
+  ['z·(z+2)', (z) => z.mul(z.add(2)), (z) => multiply(z, add(z, 2)) as Full],
+  ['(z−5)/(z+2)', (z) => z.sub(5).div(z.add(2)), (z) => divide(subtract(z, 5), add(z, 2)) as Full],
 ];
 
 describe('Complex agrees with full complex arithmetic (complex.js) at step size', () => {

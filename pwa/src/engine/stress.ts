@@ -58,9 +58,8 @@ export function nominalStressOf<T extends Liftable<T>>(
 ): T {
   checkModel(model);
   if (!MODES.includes(mode)) throw new EngineInputError('mode', `is not a test mode: ${mode}`);
-  if (!stretch.isFinite() || !(stretch.re > 0)) {
-    throw new EngineInputError('stretch', `must be a finite stretch above 0, got ${stretch.re}`);
-  }
+  if (!stretch.isFinite()) throw stretchError(stretch.re);
+  requireStretch(stretch.re);
   const stress = uncheckedStress(model, mode, stretch);
   if (!stress.isFinite()) {
     throw new EngineInputError(
@@ -71,6 +70,14 @@ export function nominalStressOf<T extends Liftable<T>>(
   return stress;
 }
 
+function stretchError(value: number): EngineInputError {
+  return new EngineInputError('stretch', `must be a finite stretch above 0, got ${value}`);
+}
+
+function requireStretch(value: number): void {
+  if (!(Number.isFinite(value) && value > 0)) throw stretchError(value);
+}
+
 /** Nominal stress P (MPa) at `stretch`. */
 export function nominalStress(model: MaterialModel, mode: Mode, stretch: number): number {
   return nominalStressOf(model, mode, new Real(stretch)).re;
@@ -78,6 +85,7 @@ export function nominalStress(model: MaterialModel, mode: Mode, stretch: number)
 
 /** Tangent dP/dλ (MPa) at `stretch`: the second stretch derivative of W. */
 export function tangentStiffness(model: MaterialModel, mode: Mode, stretch: number): number {
+  requireStretch(stretch);
   return derivative((l) => nominalStressOf(model, mode, l), stretch);
 }
 
