@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { invariantClosedForm } from './fixtures/closed-forms.js';
 import { relativeError } from './fixtures/finite-differences.js';
 import { EXAMPLE_MODELS } from './fixtures/models.js';
 import type { MaterialModel, Mode } from './material-model.js';
@@ -10,49 +11,11 @@ import {
 } from './stress.js';
 
 /*
- * Closed-form stresses and tangents, used only here as outside references (REFERENCES §2).
- * Invariant models [S: Rivlin & Saunders 1951; Treloar 1975]: P = c(λ)(W₁ + k(λ)W₂) with
- * c = 2(λ − λ⁻²), k = 1/λ (uniaxial); c = 2(λ − λ⁻⁵), k = λ² (equibiaxial);
- * c = 2(λ − λ⁻³), k = 1 (planar). Tangents by the product rule on these [D].
+ * Closed-form stresses and tangents, used only here as outside references (REFERENCES §2):
+ * the invariant models through fixtures/closed-forms.ts, Ogden directly.
  */
 
-interface ModeGeometry {
-  i1: (l: number) => number;
-  i1Slope: (l: number) => number;
-  c: (l: number) => number;
-  cSlope: (l: number) => number;
-  k: (l: number) => number;
-  kSlope: (l: number) => number;
-}
-
-const GEOMETRY: Record<Mode, ModeGeometry> = {
-  uniaxial: {
-    i1: (l) => l * l + 2 / l,
-    i1Slope: (l) => 2 * l - 2 / (l * l),
-    c: (l) => 2 * (l - l ** -2),
-    cSlope: (l) => 2 * (1 + 2 * l ** -3),
-    k: (l) => 1 / l,
-    kSlope: (l) => -1 / (l * l),
-  },
-  equibiaxial: {
-    i1: (l) => 2 * l * l + l ** -4,
-    i1Slope: (l) => 4 * l - 4 * l ** -5,
-    c: (l) => 2 * (l - l ** -5),
-    cSlope: (l) => 2 * (1 + 5 * l ** -6),
-    k: (l) => l * l,
-    kSlope: (l) => 2 * l,
-  },
-  planar: {
-    i1: (l) => l * l + 1 + l ** -2,
-    i1Slope: (l) => 2 * l - 2 * l ** -3,
-    c: (l) => 2 * (l - l ** -3),
-    cSlope: (l) => 2 * (1 + 3 * l ** -4),
-    k: () => 1,
-    kSlope: () => 0,
-  },
-};
-
-/** W₁, dW₁/dI₁ and W₂ (constant for these models) of the invariant models, at I₁. */
+/** W₁ and dW₁/dI₁ at I₁, and the constant W₂, of the built-in invariant models. */
 type InvariantDerivatives = (i1: number) => { w1: number; w11: number; w2: number };
 
 /** L⁻¹(x) by bisection on coth β − 1/β in plain numbers: independent of the engine's Newton. */
@@ -131,13 +94,8 @@ function closedForm(
       { stress: 0, tangent: 0 },
     );
   }
-  const g = GEOMETRY[mode];
-  const { w1, w11, w2 } = invariantDerivatives(model)!(g.i1(l));
-  const inner = w1 + g.k(l) * w2;
-  return {
-    stress: g.c(l) * inner,
-    tangent: g.cSlope(l) * inner + g.c(l) * (w11 * g.i1Slope(l) + g.kSlope(l) * w2),
-  };
+  const derivatives = invariantDerivatives(model)!;
+  return invariantClosedForm(mode, l, (i1) => ({ ...derivatives(i1), w12: 0, w22: 0 }));
 }
 
 const MODES: Mode[] = ['uniaxial', 'equibiaxial', 'planar'];
