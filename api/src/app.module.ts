@@ -4,6 +4,7 @@ import { AuthModule } from './auth/auth.module.js';
 import { ChangesModule } from './changes/changes.module.js';
 import { CONFIG, type Config } from './config.js';
 import { DatabaseModule } from './database/database.module.js';
+import { SeedModule } from './database/seed.js';
 import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { PhotosModule } from './photos/photos.module.js';
@@ -26,6 +27,7 @@ export class AppModule {
         PressesModule,
         PhotosModule,
         HealthModule,
+        SeedModule,
       ],
       providers: [{ provide: CONFIG, useValue: config }],
       exports: [CONFIG],

@@ -3,7 +3,7 @@ import { Injectable, UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import { InjectRepository } from '@nestjs/typeorm';
 import bcrypt from 'bcryptjs';
-import { IsNull, LessThanOrEqual, Repository, type EntityManager } from 'typeorm';
+import { In, IsNull, Repository, type EntityManager } from 'typeorm';
 import { AuditService } from '../audit/audit.service.js';
 import { Transactions } from '../database/transactions.js';
 import { User } from '../users/entities/user.entity.js';
@@ -127,19 +127,13 @@ export class AuthService {
     );
   }
 
-  /**
-   * Whether `userId` may author an operation recorded at `recordedAt` on `deviceId`: they signed
-   * in on that device no later than then, and that sign-in had not been ended before it.
-   */
-  async signedInOnDevice(userId: string, deviceId: string, recordedAt: Date): Promise<boolean> {
-    const sessions = await this.sessions.findBy({
-      userId,
-      deviceId,
-      createdAt: LessThanOrEqual(recordedAt),
-    });
-    return sessions.some(
-      (s) => !s.revokedAt || (s.revokeReason !== 'reuse' && s.revokedAt >= recordedAt),
-    );
+  /** Each user's sign-ins on one device, for checking who may author its operations. */
+  async deviceSessions(userIds: string[], deviceId: string): Promise<Map<string, Session[]>> {
+    const found = await this.sessions.findBy({ userId: In(userIds), deviceId });
+    const byUser = new Map<string, Session[]>();
+    for (const session of found)
+      byUser.set(session.userId, [...(byUser.get(session.userId) ?? []), session]);
+    return byUser;
   }
 
   private async revoke(manager: EntityManager, session: Session, reason: string): Promise<void> {
@@ -183,6 +177,17 @@ export class AuthService {
       user: publicUser(user),
     };
   }
+}
+
+/**
+ * Whether a sign-in vouches for work recorded at `at`: it began no later, and it had not been
+ * ended before (signing out later does not void earlier work). A sign-in ended because its
+ * refresh token was replayed vouches for nothing: someone else may have held it.
+ */
+export function vouchesFor(sessions: Session[], at: Date): boolean {
+  return sessions.some(
+    (s) => s.createdAt <= at && (!s.revokedAt || (s.revokeReason !== 'reuse' && s.revokedAt >= at)),
+  );
 }
 
 function sameHash(a: string, b: string): boolean {

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
 import { Roles, type AuthUser } from '../auth/access.js';
 import { CurrentUser } from '../auth/current-user.decorator.js';
 import { uuidParam } from '../common/id-param.js';
@@ -32,6 +32,7 @@ export class UsersController {
   }
 
   @Post(':id/deactivate')
+  @HttpCode(200)
   deactivate(
     @CurrentUser() actor: AuthUser,
     @Param('id', uuidParam) id: string,

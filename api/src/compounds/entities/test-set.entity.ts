@@ -1,8 +1,6 @@
 import { Column, Entity, ManyToOne, PrimaryColumn } from 'typeorm';
+import type { Mode } from '../../engine.js';
 import { Compound } from './compound.entity.js';
-
-export const TEST_MODES = ['uniaxial', 'equibiaxial', 'planar'] as const;
-export type TestMode = (typeof TEST_MODES)[number];
 
 export interface StressPoint {
   stretch: number;
@@ -25,7 +23,7 @@ export class TestSet {
   name: string;
 
   @Column({ type: 'varchar', length: 12 })
-  mode: TestMode;
+  mode: Mode;
 
   @Column({ type: 'double precision', nullable: true })
   temperatureC: number | null;

@@ -1,4 +1,5 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
+import type { SamplingPlan } from '../../engine.js';
 import { PartSpec } from '../../specs/entities/part-spec.entity.js';
 import { Press } from '../../presses/entities/press.entity.js';
 import { SpecRevision } from '../../specs/entities/spec-revision.entity.js';
@@ -6,13 +7,6 @@ import { User } from '../../users/entities/user.entity.js';
 
 export type LotStatus = 'open' | 'submitted';
 export type LotVerdict = 'pending' | 'pass' | 'flagged';
-
-export interface LotPlan {
-  codeLetter: string;
-  sampleSize: number;
-  accept: number;
-  reject: number;
-}
 
 @Entity('lots')
 @Index(['openedAt'])
@@ -69,7 +63,7 @@ export class Lot {
 
   /** The sampling plan for this lot size, fixed when the lot is opened. */
   @Column({ type: 'simple-json' })
-  plan: LotPlan;
+  plan: SamplingPlan;
 
   @Column({ type: 'integer' })
   inspected: number;

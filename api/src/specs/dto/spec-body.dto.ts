@@ -1,15 +1,12 @@
 import { Type } from 'class-transformer';
 import { IsBoolean, IsIn, IsOptional, IsUUID, ValidateNested } from 'class-validator';
 import { Finite } from '../../common/numbers.js';
+import { PREFERRED_AQLS } from '../../engine.js';
 import { GEOMETRY_TYPES, GeometryDto, type Geometry } from './geometry.dto.js';
 
 export const TOLERANCE_CLASSES = ['M1', 'M2', 'M3', 'M4'] as const;
 export const LEVELS = ['I', 'II', 'III'] as const;
 export const SEVERITIES = ['normal', 'tightened', 'reduced'] as const;
-/** ISO 2859-1 preferred AQLs for percent nonconforming (REFERENCES §9). */
-export const AQLS = [
-  0.01, 0.015, 0.025, 0.04, 0.065, 0.1, 0.15, 0.25, 0.4, 0.65, 1, 1.5, 2.5, 4, 6.5, 10,
-];
 
 export class ToleranceDto {
   @IsIn(TOLERANCE_CLASSES)
@@ -30,7 +27,8 @@ export class SamplingDto {
   @IsIn(LEVELS)
   level: (typeof LEVELS)[number];
 
-  @IsIn(AQLS)
+  /** ISO 2859-1 preferred AQLs for percent nonconforming (REFERENCES §9). */
+  @IsIn(PREFERRED_AQLS)
   aql: number;
 
   @IsIn(SEVERITIES)

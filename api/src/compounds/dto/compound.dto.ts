@@ -1,0 +1,84 @@
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  ArrayUnique,
+  IsArray,
+  IsIn,
+  IsOptional,
+  IsString,
+  IsUUID,
+  Length,
+  Matches,
+  ValidateNested,
+} from 'class-validator';
+import { Finite } from '../../common/numbers.js';
+import { MODES, type Mode } from '../../engine.js';
+import { POLYMERS, type Polymer } from '../entities/compound.entity.js';
+import { MODEL_TYPES, ModelDto, type ModelBody } from './model.dto.js';
+
+export class CreateCompoundDto {
+  @IsString()
+  @Length(1, 32)
+  @Matches(/^[A-Za-z0-9._-]+$/, {
+    message: 'code may hold letters, digits, dot, dash and underscore',
+  })
+  code: string;
+
+  @IsString()
+  @Length(1, 120)
+  name: string;
+
+  @IsIn(POLYMERS)
+  polymer: Polymer;
+
+  @Finite(10, 95)
+  hardnessShoreA: number;
+}
+
+export class StressPointDto {
+  /** Stretch λ: compression tests go below 1, tensile ones to about 8 for natural rubber. */
+  @Finite(0.05, 20)
+  stretch: number;
+
+  /** Nominal stress, MPa. */
+  @Finite(-500, 500)
+  stress: number;
+}
+
+export class CreateTestSetDto {
+  @IsString()
+  @Length(1, 120)
+  name: string;
+
+  @IsIn(MODES)
+  mode: Mode;
+
+  @IsOptional()
+  @Finite(-80, 300)
+  temperatureC?: number;
+
+  @IsArray()
+  @ArrayMinSize(2)
+  @ArrayMaxSize(5000)
+  @ValidateNested({ each: true })
+  @Type(() => StressPointDto)
+  points: StressPointDto[];
+}
+
+export class CreateFitDto {
+  /** The starting point; the fit comes back in the same shape. */
+  @ValidateNested()
+  @Type(() => ModelDto, MODEL_TYPES)
+  model: ModelBody;
+
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(50)
+  @ArrayUnique()
+  @IsUUID(undefined, { each: true })
+  testSetIds: string[];
+
+  @IsIn(['absolute', 'relative'])
+  objective: 'absolute' | 'relative';
+}

@@ -1,0 +1,270 @@
+import { randomUUID } from 'node:crypto';
+import { Injectable, NotFoundException } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import {
+  Between,
+  In,
+  IsNull,
+  LessThanOrEqual,
+  MoreThanOrEqual,
+  Repository,
+  type EntityManager,
+  type FindOptionsWhere,
+} from 'typeorm';
+import { AuditService } from '../audit/audit.service.js';
+import { ChangeFeed } from '../changes/change-feed.service.js';
+import { Transactions } from '../database/transactions.js';
+import { lotDecision, samplingPlan } from '../engine.js';
+import { Defect } from '../inspections/entities/defect.entity.js';
+import { Inspection } from '../inspections/entities/inspection.entity.js';
+import { MailService } from '../mail/mail.service.js';
+import { Press } from '../presses/entities/press.entity.js';
+import { SpecRevision } from '../specs/entities/spec-revision.entity.js';
+import { OpRejected, type OpContext } from '../sync/op-context.js';
+import type { LotOpenPayload, LotSubmitPayload } from '../sync/dto/operations.dto.js';
+import { User } from '../users/entities/user.entity.js';
+import type { DispositionDto, LotQueryDto } from './dto/lot.dto.js';
+import { Disposition } from './entities/disposition.entity.js';
+import { Lot, type LotVerdict } from './entities/lot.entity.js';
+
+export type InspectionView = Inspection & { supersededBy: string | null };
+export type LotDetail = Lot & {
+  inspections: InspectionView[];
+  defects: Defect[];
+  dispositions: Disposition[];
+};
+
+/** Inspections that no later revision replaces: the ones a lot is judged on. */
+export function currentInspections(all: Inspection[]): Inspection[] {
+  const replaced = new Set(all.map((i) => i.supersedesId).filter(Boolean));
+  return all.filter((i) => !replaced.has(i.id));
+}
+
+@Injectable()
+export class LotsService {
+  constructor(
+    private readonly transactions: Transactions,
+    private readonly audit: AuditService,
+    private readonly feed: ChangeFeed,
+    private readonly mail: MailService,
+    @InjectRepository(Lot) private readonly lots: Repository<Lot>,
+  ) {}
+
+  list(query: LotQueryDto): Promise<Lot[]> {
+    const where: FindOptionsWhere<Lot> = {};
+    if (query.status) where.status = query.status;
+    if (query.pressId) where.pressId = query.pressId;
+    if (query.specId) where.specId = query.specId;
+    if (query.flagged)
+      Object.assign(where, { serverVerdict: 'flagged', dispositionAction: IsNull() });
+    if (query.from && query.to) where.openedAt = Between(new Date(query.from), new Date(query.to));
+    else if (query.from) where.openedAt = MoreThanOrEqual(new Date(query.from));
+    else if (query.to) where.openedAt = LessThanOrEqual(new Date(query.to));
+    return this.lots.find({ where, order: { openedAt: 'DESC' }, take: query.limit ?? 200 });
+  }
+
+  async get(id: string): Promise<LotDetail> {
+    const lot = await this.lots.findOneBy({ id });
+    if (!lot) throw new NotFoundException(`No lot ${id}`);
+    const manager = this.lots.manager;
+    const [inspections, defects, dispositions] = await Promise.all([
+      manager.find(Inspection, {
+        where: { lotId: id },
+        order: { sampleIndex: 'ASC', recordedAt: 'ASC' },
+      }),
+      manager.find(Defect, { where: { lotId: id }, order: { recordedAt: 'ASC' } }),
+      manager.find(Disposition, { where: { lotId: id }, order: { decidedAt: 'ASC' } }),
+    ]);
+    const supersededBy = new Map(inspections.map((i) => [i.supersedesId, i.id]));
+    return {
+      ...lot,
+      inspections: inspections.map((i) => ({ ...i, supersededBy: supersededBy.get(i.id) ?? null })),
+      defects,
+      dispositions,
+    };
+  }
+
+  /** `lot.open`: the lot gets the sampling plan of its spec revision for its size, for good. */
+  async open(ctx: OpContext, p: LotOpenPayload): Promise<string> {
+    const { manager } = ctx;
+    const revision = await manager.findOneBy(SpecRevision, { id: p.specRevisionId });
+    if (revision?.status !== 'released') {
+      throw new OpRejected(`specRevisionId ${p.specRevisionId} is not a released spec revision`);
+    }
+    const press = await manager.findOneBy(Press, { id: p.pressId });
+    if (!press?.active) throw new OpRejected(`pressId ${p.pressId} is not an active press`);
+    if (await manager.existsBy(Lot, { id: p.id }))
+      throw new OpRejected(`lot ${p.id} already exists`);
+    if (await manager.existsBy(Lot, { lotNumber: p.lotNumber })) {
+      throw new OpRejected(`lotNumber ${p.lotNumber} is already used by another lot`);
+    }
+    const lot: Lot = {
+      id: p.id,
+      lotNumber: p.lotNumber,
+      specId: revision.specId,
+      specRevisionId: revision.id,
+      pressId: press.id,
+      cavity: p.cavity,
+      lotSize: p.lotSize,
+      moldedAt: new Date(p.moldedAt),
+      openedBy: ctx.authorId,
+      openedAt: ctx.recordedAt,
+      deviceId: ctx.deviceId,
+      status: 'open',
+      plan: samplingPlan({ lotSize: p.lotSize, ...revision.body.sampling }),
+      inspected: 0,
+      nonconforming: 0,
+      serverVerdict: 'pending',
+      deviceVerdict: null,
+      submittedAt: null,
+      flaggedAt: null,
+      dispositionAction: null,
+    };
+    await manager.insert(Lot, lot);
+    await this.audit.record(manager, ctx.authorId, 'lot.open', 'lot', lot.id, null, lot);
+    await this.feed.publish(manager, 'lot', lot.id, lot);
+    return lot.id;
+  }
+
+  /** `lot.submit`: the inspector is done; the device's own verdict is kept beside the server's. */
+  async submit(ctx: OpContext, p: LotSubmitPayload): Promise<string> {
+    const before = await this.openLot(ctx.manager, p.lotId);
+    const patch = {
+      status: 'submitted' as const,
+      deviceVerdict: {
+        verdict: p.deviceVerdict.verdict,
+        nonconforming: p.deviceVerdict.nonconforming,
+      },
+      submittedAt: ctx.recordedAt,
+    };
+    await ctx.manager.update(Lot, { id: before.id }, patch);
+    await this.audit.record(ctx.manager, ctx.authorId, 'lot.submit', 'lot', before.id, before, {
+      ...before,
+      ...patch,
+    });
+    return before.id;
+  }
+
+  /** The lot, if it exists and still takes records. */
+  async openLot(manager: EntityManager, id: string): Promise<Lot> {
+    const lot = await manager.findOneBy(Lot, { id });
+    if (!lot)
+      throw new OpRejected(`lot ${id} is not known to the server (push its lot.open first)`);
+    if (lot.status !== 'open') throw new OpRejected(`lot ${lot.lotNumber} is already submitted`);
+    return lot;
+  }
+
+  /**
+   * Counts a lot's current sampled parts against its plan after a batch touched it. A part is
+   * nonconforming when the server's verdict says so or when a critical or major defect was
+   * recorded on it (under any revision of its record). The first time the reject number is
+   * reached the lot is flagged and the supervisors are mailed; the mail's key keeps it to one.
+   */
+  async recount(manager: EntityManager, lotId: string): Promise<void> {
+    const lot = await manager.findOneByOrFail(Lot, { id: lotId });
+    const all = await manager.find(Inspection, {
+      select: { id: true, sampleIndex: true, supersedesId: true, conforming: true },
+      where: { lotId },
+    });
+    const defects = await manager.find(Defect, {
+      select: { inspectionId: true },
+      where: { lotId, severity: In(['critical', 'major']) },
+    });
+    const indexOf = new Map(all.map((i) => [i.id, i.sampleIndex]));
+    const bad = new Set(
+      defects.map((d) => (d.inspectionId ? indexOf.get(d.inspectionId) : undefined)),
+    );
+    const current = currentInspections(all);
+    const nonconforming = current.filter((i) => !i.conforming || bad.has(i.sampleIndex)).length;
+    const { decision } = lotDecision(lot.plan, { inspected: current.length, nonconforming });
+    const serverVerdict: LotVerdict =
+      decision === 'reject' ? 'flagged' : decision === 'accept' ? 'pass' : 'pending';
+    const newlyFlagged = serverVerdict === 'flagged' && !lot.flaggedAt;
+    const after: Lot = {
+      ...lot,
+      inspected: current.length,
+      nonconforming,
+      serverVerdict,
+      flaggedAt: newlyFlagged ? new Date() : lot.flaggedAt,
+    };
+    await manager.update(
+      Lot,
+      { id: lotId },
+      {
+        inspected: after.inspected,
+        nonconforming,
+        serverVerdict,
+        flaggedAt: after.flaggedAt,
+      },
+    );
+    if (after.serverVerdict !== lot.serverVerdict) {
+      await this.audit.record(manager, null, 'lot.verdict', 'lot', lotId, lot, after);
+    }
+    await this.feed.publish(manager, 'lot', lotId, after);
+    if (newlyFlagged) await this.notifyFlagged(manager, after);
+  }
+
+  private async notifyFlagged(manager: EntityManager, lot: Lot): Promise<void> {
+    const supervisors = await manager.findBy(User, { role: 'supervisor', active: true });
+    if (supervisors.length === 0) return;
+    const revision = await manager.findOneOrFail(SpecRevision, {
+      where: { id: lot.specRevisionId },
+      relations: { spec: true },
+    });
+    const press = await manager.findOneByOrFail(Press, { id: lot.pressId });
+    const part = `${revision.spec?.partNumber} rev ${revision.revision} (${revision.spec?.name})`;
+    await this.mail.enqueue(
+      manager,
+      `lot-flagged:${lot.id}`,
+      supervisors.map((s) => s.email),
+      `Lot ${lot.lotNumber} flagged: ${lot.nonconforming} nonconforming of ${lot.inspected}`,
+      [
+        `Lot ${lot.lotNumber} of part ${part}, press ${press.code}, cavity ${lot.cavity}, is flagged.`,
+        `${lot.nonconforming} of ${lot.inspected} sampled parts are nonconforming; the plan`,
+        `(code letter ${lot.plan.codeLetter}, n = ${lot.plan.sampleSize}) rejects at ${lot.plan.reject}.`,
+        '',
+        `Review it in Gumshoe and record a disposition (lot id ${lot.id}).`,
+      ].join('\n'),
+    );
+  }
+
+  disposition(actorId: string, lotId: string, dto: DispositionDto): Promise<Disposition> {
+    return this.transactions.run(async (manager) => {
+      const lot = await manager.findOneBy(Lot, { id: lotId });
+      if (!lot) throw new NotFoundException(`No lot ${lotId}`);
+      const disposition: Disposition = {
+        id: randomUUID(),
+        lotId,
+        action: dto.action,
+        note: dto.note,
+        decidedBy: actorId,
+        decidedAt: new Date(),
+      };
+      await manager.insert(Disposition, disposition);
+      await manager.update(Lot, { id: lotId }, { dispositionAction: dto.action });
+      await this.audit.record(manager, actorId, 'lot.disposition', 'lot', lotId, lot, {
+        ...lot,
+        dispositionAction: dto.action,
+      });
+      await this.feed.publish(manager, 'disposition', disposition.id, disposition);
+      await this.feed.publish(manager, 'lot', lotId, { ...lot, dispositionAction: dto.action });
+      return disposition;
+    });
+  }
+
+  /** Back to open so an inspector can re-check it; its records stay as they are. */
+  reopen(actorId: string, lotId: string, note: string): Promise<Lot> {
+    return this.transactions.run(async (manager) => {
+      const lot = await manager.findOneBy(Lot, { id: lotId });
+      if (!lot) throw new NotFoundException(`No lot ${lotId}`);
+      const after: Lot = { ...lot, status: 'open', submittedAt: null };
+      await manager.update(Lot, { id: lotId }, { status: 'open', submittedAt: null });
+      await this.audit.record(manager, actorId, 'lot.reopen', 'lot', lotId, lot, {
+        ...after,
+        note,
+      });
+      await this.feed.publish(manager, 'lot', lotId, after);
+      return after;
+    });
+  }
+}

@@ -1,0 +1,195 @@
+import { randomUUID } from 'node:crypto';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { Repository, type EntityManager } from 'typeorm';
+import { AuditService } from '../audit/audit.service.js';
+import { ChangeFeed } from '../changes/change-feed.service.js';
+import { badInput } from '../common/validation.js';
+import { CompoundFit } from '../compounds/entities/compound-fit.entity.js';
+import { Compound } from '../compounds/entities/compound.entity.js';
+import { Transactions } from '../database/transactions.js';
+import { checkGeometry } from '../engine.js';
+import type { SpecBody } from './dto/spec-body.dto.js';
+import type { CreateSpecDto } from './dto/spec.dto.js';
+import { PartSpec } from './entities/part-spec.entity.js';
+import { SpecRevision } from './entities/spec-revision.entity.js';
+import { specWindows } from './spec-windows.js';
+
+export type SpecDetail = PartSpec & { revisions: SpecRevision[] };
+
+@Injectable()
+export class SpecsService {
+  constructor(
+    private readonly transactions: Transactions,
+    private readonly audit: AuditService,
+    private readonly feed: ChangeFeed,
+    @InjectRepository(PartSpec) private readonly specs: Repository<PartSpec>,
+  ) {}
+
+  list(): Promise<PartSpec[]> {
+    return this.specs.find({ relations: { currentRevision: true }, order: { partNumber: 'ASC' } });
+  }
+
+  async get(id: string): Promise<SpecDetail> {
+    const spec = await this.specs.findOne({ where: { id }, relations: { currentRevision: true } });
+    if (!spec) throw new NotFoundException(`No part spec ${id}`);
+    const revisions = await this.specs.manager.find(SpecRevision, {
+      where: { specId: id },
+      relations: { fit: true },
+      order: { revision: 'ASC' },
+    });
+    return { ...spec, revisions };
+  }
+
+  create(actorId: string | null, dto: CreateSpecDto): Promise<PartSpec> {
+    return this.transactions.run(async (manager) => {
+      const spec: PartSpec = {
+        id: randomUUID(),
+        partNumber: dto.partNumber,
+        name: dto.name,
+        description: dto.description ?? '',
+        currentRevisionId: null,
+        createdAt: new Date(),
+      };
+      await manager.insert(PartSpec, spec);
+      await this.audit.record(manager, actorId, 'spec.create', 'spec', spec.id, null, spec);
+      return spec;
+    });
+  }
+
+  addRevision(actorId: string | null, specId: string, body: SpecBody): Promise<SpecRevision> {
+    return this.transactions.run(async (manager) => {
+      await this.check(manager, body);
+      if (!(await manager.existsBy(PartSpec, { id: specId }))) {
+        throw new NotFoundException(`No part spec ${specId}`);
+      }
+      const last = (await manager.maximum(SpecRevision, 'revision', { specId })) ?? 0;
+      const revision: SpecRevision = {
+        id: randomUUID(),
+        specId,
+        revision: last + 1,
+        status: 'draft',
+        body: plain(body),
+        compoundId: body.compoundId,
+        fitId: null,
+        derived: null,
+        createdAt: new Date(),
+        releasedAt: null,
+        releasedBy: null,
+      };
+      await manager.insert(SpecRevision, revision);
+      await this.audit.record(manager, actorId, 'spec.revision', 'spec', specId, null, revision);
+      return revision;
+    });
+  }
+
+  updateRevision(
+    actorId: string,
+    specId: string,
+    revisionId: string,
+    body: SpecBody,
+  ): Promise<SpecRevision> {
+    return this.transactions.run(async (manager) => {
+      const before = await this.draft(manager, specId, revisionId);
+      await this.check(manager, body);
+      const after: SpecRevision = { ...before, body: plain(body), compoundId: body.compoundId };
+      await manager.update(
+        SpecRevision,
+        { id: revisionId },
+        { body: after.body, compoundId: after.compoundId },
+      );
+      await this.audit.record(
+        manager,
+        actorId,
+        'spec.revision.update',
+        'spec',
+        specId,
+        before,
+        after,
+      );
+      return after;
+    });
+  }
+
+  /**
+   * Freezes a draft: it takes the compound's current fit and the engine's windows for it, and
+   * becomes what new lots of this part are opened against.
+   */
+  release(actorId: string | null, specId: string, revisionId: string): Promise<SpecRevision> {
+    return this.transactions.run(async (manager) => {
+      const before = await this.draft(manager, specId, revisionId);
+      const compound = await manager.findOneByOrFail(Compound, { id: before.compoundId });
+      if (!compound.currentFitId) {
+        throw new ConflictException(
+          `Compound ${compound.code} has no published fit to release against`,
+        );
+      }
+      const fit = await manager.findOneByOrFail(CompoundFit, { id: compound.currentFitId });
+      const after: SpecRevision = {
+        ...before,
+        status: 'released',
+        fitId: fit.id,
+        derived: specWindows(before.body, fit),
+        releasedAt: new Date(),
+        releasedBy: actorId,
+      };
+      await manager.update(
+        SpecRevision,
+        { id: revisionId },
+        {
+          status: after.status,
+          fitId: after.fitId,
+          derived: after.derived,
+          releasedAt: after.releasedAt,
+          releasedBy: after.releasedBy,
+        },
+      );
+      await manager.update(PartSpec, { id: specId }, { currentRevisionId: revisionId });
+      await this.audit.record(manager, actorId, 'spec.release', 'spec', specId, before, after);
+      const spec = await manager.findOneByOrFail(PartSpec, { id: specId });
+      await this.feed.publish(manager, 'spec', revisionId, {
+        ...after,
+        fit,
+        partNumber: spec.partNumber,
+        name: spec.name,
+      });
+      return after;
+    });
+  }
+
+  private async draft(
+    manager: EntityManager,
+    specId: string,
+    revisionId: string,
+  ): Promise<SpecRevision> {
+    const revision = await manager.findOneBy(SpecRevision, { id: revisionId, specId });
+    if (!revision) throw new NotFoundException(`No revision ${revisionId} of part spec ${specId}`);
+    if (revision.status !== 'draft') {
+      throw new ConflictException(`Revision ${revision.revision} is released and cannot change`);
+    }
+    return revision;
+  }
+
+  /** What the DTO cannot see on one field: references and relations between fields. */
+  private async check(manager: EntityManager, body: SpecBody): Promise<void> {
+    checkGeometry(body.geometry);
+    if (body.testDeflection >= body.geometry.thickness) {
+      throw badInput([
+        {
+          field: 'testDeflection',
+          messages: ['testDeflection must be less than geometry.thickness'],
+        },
+      ]);
+    }
+    if (!(await manager.existsBy(Compound, { id: body.compoundId }))) {
+      throw badInput([
+        { field: 'compoundId', messages: [`compoundId ${body.compoundId} is not a compound`] },
+      ]);
+    }
+  }
+}
+
+/** The validated DTO as plain JSON, so what is stored is exactly what was checked. */
+function plain(body: SpecBody): SpecBody {
+  return JSON.parse(JSON.stringify(body)) as SpecBody;
+}
