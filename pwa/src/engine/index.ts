@@ -82,3 +82,82 @@ export {
   type SpecificationLimits,
 } from './capability.js';
 export { binomialCdf, studentTCdf, studentTTwoSided } from './statistics.js';
+
+// Part mechanics: shape factor, hardness, compression modulus, expected load (REFERENCES §5–§6)
+export {
+  dimensionNames,
+  loadedArea,
+  loadedAreaOf,
+  shapeFactor,
+  shapeFactorOf,
+  type DimensionName,
+  type Geometry,
+  type GeometryOf,
+  type Shape,
+} from './geometry.js';
+export {
+  GENT_SHORE_A,
+  LINDLEY_NATURAL_RUBBER,
+  RELIABLE_SHORE_A,
+  materialFactorOf,
+  medianHardness,
+  youngsModulusFromShoreA,
+  youngsModulusFromShoreAOf,
+  type HardnessDefaults,
+  type HardnessDefaultsRow,
+} from './hardness.js';
+export {
+  DEFAULT_BULK_CORRECTION,
+  annulusHoleFactorOf,
+  apparentCompressionModulus,
+  apparentCompressionModulusOf,
+  withBulkCompressibilityOf,
+  type BulkCorrection,
+  type CompressionModulusInput,
+  type Faces,
+} from './compression-modulus.js';
+export {
+  expectedLoad,
+  loadOf,
+  prepareLoadCase,
+  type ExpectedLoad,
+  type FaceCondition,
+  type LoadCase,
+  type LoadEstimate,
+  type LoadVariables,
+  type PreparedLoadCase,
+  type ValidityCode,
+  type ValidityFlag,
+} from './expected-load.js';
+export {
+  WINDOW_TOLERANCE,
+  acceptanceWindows,
+  loadLimits,
+  type AcceptanceWindows,
+  type LoadTolerance,
+  type WindowEdge,
+} from './acceptance-windows.js';
+
+// Part specs, measurements and verdicts: plain JSON shared by tablet, desk and server
+export {
+  specLoadCase,
+  specLoadTolerance,
+  type DefectLocation,
+  type DefectRecord,
+  type DefectSeverity,
+  type DimensionClass,
+  type PartMeasurement,
+  type PartSpec,
+} from './part-spec.js';
+export {
+  lotVerdict,
+  partVerdict,
+  prepareSpec,
+  type Characteristic,
+  type CharacteristicVerdict,
+  type LotVerdict,
+  type PartVerdict,
+  type PreparedSpec,
+  type VerdictOptions,
+  type VerdictStatus,
+} from './verdict.js';
