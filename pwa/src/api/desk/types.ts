@@ -1,5 +1,6 @@
 import type {
   AgingPoint,
+  BulkCorrection,
   DimensionKind,
   FitResult,
   MaterialModel,
@@ -118,6 +119,9 @@ export interface DeskSpecBody extends Omit<SpecBody, 'tolerance'> {
     class: ToleranceClass;
     dimensions?: Partial<Record<DimensionName, DimensionTolerance>>;
   };
+  /** Unbonded parts: faces held by 'friction' (bounds) or tested 'lubricated'. */
+  unbondedFaces?: 'friction' | 'lubricated';
+  mechanics?: { bulkCorrection?: BulkCorrection; materialFactor?: number };
   compressionSetCondition?: { temperatureC: number; hours: number };
   note?: string;
 }

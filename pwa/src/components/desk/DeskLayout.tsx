@@ -1,4 +1,12 @@
-import { IonContent, IonHeader, IonPage, IonTitle, IonToolbar } from '@ionic/react';
+import {
+  IonButtons,
+  IonContent,
+  IonHeader,
+  IonMenuButton,
+  IonPage,
+  IonTitle,
+  IonToolbar,
+} from '@ionic/react';
 import type { ReactNode } from 'react';
 import { NavLink } from 'react-router-dom';
 import './desk.css';
@@ -17,12 +25,15 @@ interface Props {
   children: ReactNode;
 }
 
-/** Every desk screen: the desk's own sections on the left, the screen's work on the right. */
+/** Every desk screen: the desk's own sections along the top, the screen's work below. */
 export function DeskLayout({ title, children }: Props) {
   return (
     <IonPage>
       <IonHeader>
         <IonToolbar>
+          <IonButtons slot="start">
+            <IonMenuButton />
+          </IonButtons>
           <IonTitle>Quality desk · {title}</IonTitle>
         </IonToolbar>
       </IonHeader>

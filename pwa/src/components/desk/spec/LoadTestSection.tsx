@@ -1,0 +1,54 @@
+import type { CompoundRecord } from '../../../api/desk/types';
+import { DeskNumberField, DeskSelect } from '../DeskField';
+import type { SectionProps } from './sectionProps';
+
+interface Props extends SectionProps {
+  compounds: CompoundRecord[];
+}
+
+/** Which compound, and the load test the inspector runs on every sampled part. */
+export function LoadTestSection({ fields, problems, onChange, readOnly, compounds }: Props) {
+  const compound = compounds.find((c) => c.id === fields.compoundId);
+  return (
+    <fieldset className="desk-card" disabled={readOnly}>
+      <legend>
+        <strong>Compound and load test</strong>
+      </legend>
+      <div className="desk-grid desk-grid--4">
+        <DeskSelect
+          label="Compound"
+          value={fields.compoundId}
+          onChange={(compoundId) => onChange({ compoundId })}
+          options={[
+            ['', 'choose a compound'],
+            ...compounds.map((c): [string, string] => [
+              c.id,
+              `${c.code} · ${c.name}${c.currentFit ? ` (v${c.currentFit.version})` : ' (no constants yet)'}`,
+            ]),
+          ]}
+        />
+        <DeskNumberField
+          label="Test deflection"
+          unit="mm"
+          value={fields.testDeflection}
+          problem={problems.testDeflection}
+          onChange={(testDeflection) => onChange({ testDeflection })}
+        />
+        <DeskNumberField
+          label="Load tolerance ±"
+          unit="%"
+          value={fields.loadTolerancePercent}
+          problem={problems.loadTolerancePercent}
+          onChange={(loadTolerancePercent) => onChange({ loadTolerancePercent })}
+        />
+      </div>
+      {problems.compoundId && <span className="desk-problem">{problems.compoundId}</span>}
+      {compound && !compound.currentFit && (
+        <p className="desk-callout desk-callout--warn">
+          {compound.code} has no published constants, so there is no expected load yet. Publish a
+          fit on the compound first.
+        </p>
+      )}
+    </fieldset>
+  );
+}
