@@ -3,14 +3,20 @@ import { EngineInputError, requireInRange, requireNonNegative, requirePositive }
 import {
   boundingFaces,
   expectedLoad,
-  loadOf,
   liftVariables,
-  caseVariables,
+  loadOf,
   prepareLoadCase,
   type ExpectedLoad,
+  type PreparedLoadCase,
   type ValidityFlag,
 } from './expected-load.js';
-import { dimensionNames, mapDimensions, type DimensionName, type Geometry } from './geometry.js';
+import {
+  checkGeometry,
+  dimensionNames,
+  mapDimensions,
+  type DimensionName,
+  type Geometry,
+} from './geometry.js';
 import { RELIABLE_SHORE_A, medianHardness } from './hardness.js';
 import { moldedTolerance } from './molded-tolerance.js';
 import {
@@ -64,16 +70,26 @@ export interface PreparedSpec {
   expected: ExpectedLoad;
   lowerLoad: number;
   upperLoad: number;
+  /** The nominal load case, checked: each part's own expectation varies only its variables. */
+  loadCase: PreparedLoadCase;
 }
 
 export function prepareSpec(spec: PartSpec, options: VerdictOptions = {}): PreparedSpec {
   const nearFraction = requireInRange('nearFraction', options.nearFraction ?? 0.1, 0, 0.5);
   const tolerance = specLoadTolerance(spec);
-  const expected = expectedLoad(specLoadCase(spec));
+  const loadCase = specLoadCase(spec);
+  const expected = expectedLoad(loadCase);
   if (spec.compressionSetLimitPercent !== undefined) {
     requireInRange('compressionSetLimitPercent', spec.compressionSetLimitPercent, 0, 100);
   }
-  return { spec, nearFraction, tolerance, expected, ...loadLimits(expected, tolerance) };
+  return {
+    spec,
+    nearFraction,
+    tolerance,
+    expected,
+    ...loadLimits(expected, tolerance),
+    loadCase: prepareLoadCase(loadCase),
+  };
 }
 
 function classify(
@@ -186,18 +202,29 @@ function measuredGeometry(spec: PartSpec, measurement: PartMeasurement): Geometr
 // When size or hardness was measured, what the model expects for this very part: it tells a
 // compound or cure problem from a dimensional one.
 function partClause(prepared: PreparedSpec, measurement: PartMeasurement): string {
-  const { spec } = prepared;
+  const { spec, loadCase } = prepared;
   const hardnessMeasured = measurement.hardness !== undefined && measurement.hardness.length > 0;
   const sizeMeasured = measurement.thickness !== undefined || measurement.dimensions !== undefined;
   if (!hardnessMeasured && !sizeMeasured) return '';
-  const hardness = hardnessMeasured ? medianHardness(measurement.hardness ?? []) : undefined;
-  const loadCase = prepareLoadCase(
-    specLoadCase(spec, hardness, measuredGeometry(spec, measurement)),
+  const geometry = measuredGeometry(spec, measurement);
+  checkGeometry(geometry);
+  if (!(geometry.thickness > spec.testDeflection)) {
+    throw new EngineInputError(
+      'thickness',
+      `must exceed the test deflection ${spec.testDeflection} mm`,
+    );
+  }
+  const variables = liftVariables(
+    {
+      geometry,
+      hardness: hardnessMeasured ? medianHardness(measurement.hardness ?? []) : loadCase.hardness,
+      deflection: spec.testDeflection,
+    },
+    (v) => new Real(v),
   );
-  const variables = liftVariables(caseVariables(loadCase), (v) => new Real(v));
   const [lowFaces, highFaces] = boundingFaces(loadCase.source.faces);
   const low = loadOf(loadCase, lowFaces, variables).re;
-  const high = loadOf(loadCase, highFaces, variables).re;
+  const high = highFaces === lowFaces ? low : loadOf(loadCase, highFaces, variables).re;
   return `; its measured size and hardness predict ${loadRange(low, high)}`;
 }
 
