@@ -18,3 +18,44 @@ export function modelLabel(model: MaterialModel): string {
   if (model.kind === 'formula') return `formula: ${model.energy}`;
   return MODEL_NAMES[model.kind];
 }
+
+/** A model's constants as name–value pairs, in the literature's symbols. */
+export function modelConstants(model: MaterialModel): [string, number][] {
+  switch (model.kind) {
+    case 'neo-hookean':
+      return [['C10', model.c10]];
+    case 'mooney-rivlin':
+      return [
+        ['C10', model.c10],
+        ['C01', model.c01],
+      ];
+    case 'yeoh':
+      return [
+        ['C10', model.c10],
+        ['C20', model.c20],
+        ['C30', model.c30],
+      ];
+    case 'ogden':
+      return model.terms.flatMap((t, p): [string, number][] => [
+        [`μ${p + 1}`, t.mu],
+        [`α${p + 1}`, t.alpha],
+      ]);
+    case 'gent':
+      return [
+        ['μ', model.mu],
+        ['Jm', model.jm],
+      ];
+    case 'arruda-boyce':
+      return [
+        ['μ', model.mu],
+        ['N', model.n],
+      ];
+    case 'formula':
+      return Object.entries(model.constants);
+  }
+}
+
+/** Units of a constant: Ogden exponents, Gent's Jm and Arruda–Boyce's N have none, the rest MPa. */
+export function constantUnit(name: string): string {
+  return /^(α\d+|Jm|N)$/.test(name) ? '' : ' MPa';
+}

@@ -18,7 +18,6 @@ const loaders: [path: string, load: Loader][] = [
   ['/desk/specs/:specId', () => import('./SpecPage')],
   ['/desk/trends', () => import('./TrendsPage')],
   ['/desk/reports', () => import('./ReportsPage')],
-  ['/desk/reports/lots/:lotId', () => import('./LotReportPage')],
   ['/desk/reports/compounds/:compoundId/fits/:fitId', () => import('./FitReportPage')],
 ];
 

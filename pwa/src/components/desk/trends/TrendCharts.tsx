@@ -40,7 +40,7 @@ export function TrendCharts({ rows, characteristic, revision }: Props) {
       out: outIndex.has(i),
       lotId: s.lotId,
     }));
-  const openLot = (lotId: string) => navigate(`/desk/reports/lots/${lotId}`);
+  const openLot = (lotId: string) => navigate(`/review/${lotId}`);
   const specification = revision ? engineAnswer(() => specLimits(revision, characteristic)) : null;
   return (
     <>
@@ -93,7 +93,7 @@ export function TrendCharts({ rows, characteristic, revision }: Props) {
                 <tr key={subgroup.lotId}>
                   <td>
                     <a
-                      href={`/desk/reports/lots/${subgroup.lotId}`}
+                      href={`/review/${subgroup.lotId}`}
                       onClick={(e) => (e.preventDefault(), openLot(subgroup.lotId))}
                     >
                       {subgroup.lotNumber}
