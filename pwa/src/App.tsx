@@ -1,20 +1,66 @@
-import { IonApp, IonRouterOutlet } from '@ionic/react';
+import { IonApp, IonRouterOutlet, IonSplitPane } from '@ionic/react';
 import { IonReactRouter } from '@ionic/react-router';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { Route } from 'react-router-dom';
+import { useEffect } from 'react';
+import { Navigate, Route } from 'react-router-dom';
+import { useSession } from './auth/session';
+import { AppMenu } from './components/AppMenu';
+import { RequireRole } from './components/RequireRole';
 import { UpdatePrompt } from './components/UpdatePrompt';
-import { ShellHomePage } from './pages/ShellHomePage';
+import { requestPersistentStorage } from './offline/persist';
+import { syncScheduler } from './offline/scheduler';
+import { SetPinPage } from './pages/SetPinPage';
+import { SignInPage } from './pages/SignInPage';
+import { deskRoutes } from './pages/desk/routes';
+import { DESK_ROLES, homeFor, ROUTES } from './routes';
 
-const queryClient = new QueryClient();
+const queryClient = new QueryClient({
+  defaultOptions: {
+    // Server data on the review and admin pages; retries are the sync engine's job, not theirs.
+    queries: { retry: 1, staleTime: 15_000, networkMode: 'always' },
+  },
+});
+
+function Home() {
+  const { loaded, person } = useSession();
+  if (!loaded) return null;
+  return <Navigate to={person ? homeFor(person.role) : '/sign-in'} replace />;
+}
 
 export default function App() {
+  useEffect(() => {
+    void requestPersistentStorage();
+    syncScheduler.start();
+    return () => syncScheduler.stop();
+  }, []);
+
   return (
     <QueryClientProvider client={queryClient}>
       <IonApp>
         <IonReactRouter>
-          <IonRouterOutlet>
-            <Route path="/" element={<ShellHomePage />} />
-          </IonRouterOutlet>
+          <IonSplitPane contentId="main" when="(min-width: 1100px)">
+            <AppMenu contentId="main" />
+            <IonRouterOutlet id="main">
+              <Route path="/" element={<Home />} />
+              <Route path="/sign-in" element={<SignInPage />} />
+              <Route path="/pin" element={<SetPinPage />} />
+              {ROUTES.map(({ path, roles, page: Page }) => (
+                <Route
+                  key={path}
+                  path={path}
+                  element={
+                    <RequireRole roles={roles}>
+                      <Page />
+                    </RequireRole>
+                  }
+                />
+              ))}
+              {deskRoutes((page) => (
+                <RequireRole roles={DESK_ROLES}>{page}</RequireRole>
+              ))}
+              <Route path="*" element={<Home />} />
+            </IonRouterOutlet>
+          </IonSplitPane>
         </IonReactRouter>
         <UpdatePrompt />
       </IonApp>

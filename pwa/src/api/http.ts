@@ -35,6 +35,8 @@ export interface RequestOptions {
   token?: string;
   timeoutMs?: number;
   signal?: AbortSignal;
+  /** 'blob' for photos and files: the body is handed over as it came. */
+  expect?: 'data' | 'blob';
 }
 
 /** Nest's error body: `{ message: string | string[], field?, error? }`. */
@@ -49,9 +51,10 @@ function reasonFrom(body: unknown, fallback: string): { reason: string; field?: 
   return { reason: fallback };
 }
 
-async function parseBody(response: Response): Promise<unknown> {
+async function parseBody(response: Response, expect: RequestOptions['expect']): Promise<unknown> {
   const type = response.headers.get('content-type') ?? '';
   if (response.status === 204) return undefined;
+  if (expect === 'blob' && response.ok) return response.blob();
   if (type.includes('application/json')) return response.json();
   return response.text();
 }
@@ -61,7 +64,7 @@ async function parseBody(response: Response): Promise<unknown> {
  * a timeout (a hung Wi-Fi link must not block the outbox forever) and typed errors.
  */
 export async function request<T>(path: string, options: RequestOptions = {}): Promise<T> {
-  const { method = 'GET', body, token, timeoutMs = DEFAULT_TIMEOUT_MS, signal } = options;
+  const { method = 'GET', body, token, timeoutMs = DEFAULT_TIMEOUT_MS, signal, expect } = options;
   const headers: Record<string, string> = { accept: 'application/json' };
   if (token) headers.authorization = `Bearer ${token}`;
   const isForm = typeof FormData !== 'undefined' && body instanceof FormData;
@@ -84,7 +87,7 @@ export async function request<T>(path: string, options: RequestOptions = {}): Pr
   }
   let parsed: unknown;
   try {
-    parsed = await parseBody(response);
+    parsed = await parseBody(response, expect);
   } catch {
     parsed = undefined;
   }

@@ -19,19 +19,20 @@ export async function setPin(userId: string, pin: string): Promise<void> {
   await db.people.update(userId, { pinHash: await hash(pin, BCRYPT_COST), failedPins: 0 });
 }
 
-export type PinOutcome = 'ok' | 'wrong' | 'locked';
+export type PinCheck =
+  { outcome: 'ok' } | { outcome: 'locked' } | { outcome: 'wrong'; triesLeft: number };
 
 /**
  * Checks a quick-switch PIN entirely on the device, so it works without a connection.
  * After MAX_PIN_TRIES wrong PINs the PIN and tokens are dropped: a password sign-in is needed.
  */
-export async function checkPin(userId: string, pin: string): Promise<PinOutcome> {
+export async function checkPin(userId: string, pin: string): Promise<PinCheck> {
   const person = await db.people.get(userId);
-  if (!person?.pinHash) return 'locked';
+  if (!person?.pinHash) return { outcome: 'locked' };
   const { compare } = await bcrypt();
   if (await compare(pin, person.pinHash)) {
     await db.people.update(userId, { failedPins: 0, lastActiveAt: new Date().toISOString() });
-    return 'ok';
+    return { outcome: 'ok' };
   }
   const failedPins = person.failedPins + 1;
   if (failedPins >= MAX_PIN_TRIES) {
@@ -41,8 +42,8 @@ export async function checkPin(userId: string, pin: string): Promise<PinOutcome>
       accessToken: undefined,
       refreshToken: undefined,
     });
-    return 'locked';
+    return { outcome: 'locked' };
   }
   await db.people.update(userId, { failedPins });
-  return 'wrong';
+  return { outcome: 'wrong', triesLeft: MAX_PIN_TRIES - failedPins };
 }

@@ -35,3 +35,11 @@ export async function markSent(opIds: string[]): Promise<void> {
 export async function markRejected(opId: string, reason: string): Promise<void> {
   await db.outbox.where('opId').equals(opId).modify({ state: 'rejected', reason });
 }
+
+/**
+ * Puts a refused operation back in line under the same opId: the server applied nothing for
+ * it, so it may be sent again — e.g. once the lot it names has reached the server.
+ */
+export async function sendAgain(opId: string): Promise<void> {
+  await db.outbox.where('opId').equals(opId).modify({ state: 'waiting', reason: undefined });
+}

@@ -4,9 +4,10 @@
  * most once by the server, photos are addressed by hash, and the pull cursor is stored in
  * the same transaction as the rows it delivered.
  */
-import { ApiError, NetworkError, request } from '../api/http';
+import { callAs } from '../api/client';
+import { ApiError, NetworkError, type RequestOptions } from '../api/http';
 import type { PullAnswer, PushOperation, PushResult } from '../api/types';
-import { accessTokenFor, SignInNeeded } from '../auth/tokens';
+import { SignInNeeded } from '../auth/tokens';
 import { db, deviceId, getMeta, setMeta, type OutboxOp } from './db';
 import { markRejected, markSent, waitingOps } from './outbox';
 
@@ -50,26 +51,13 @@ async function candidates(): Promise<string[]> {
     : withTokens;
 }
 
-/** Runs `call` with a token from this device, trying the next person when one is spent. */
-async function authorized<T>(call: (token: string) => Promise<T>): Promise<T> {
+/** Runs the request as someone signed in on this device, trying the next person when one is spent. */
+async function authorized<T>(path: string, options: Omit<RequestOptions, 'token'>): Promise<T> {
   for (const userId of await candidates()) {
-    let token: string;
     try {
-      token = await accessTokenFor(userId);
+      return await callAs<T>(userId, path, options);
     } catch (error) {
-      if (error instanceof SignInNeeded) continue;
-      throw error;
-    }
-    try {
-      return await call(token);
-    } catch (error) {
-      if (!(error instanceof ApiError && error.status === 401)) throw error;
-      try {
-        return await call(await accessTokenFor(userId, token));
-      } catch (retry) {
-        if (retry instanceof SignInNeeded) continue;
-        throw retry;
-      }
+      if (!(error instanceof SignInNeeded)) throw error;
     }
   }
   throw new NoSignIn();
@@ -100,14 +88,11 @@ async function pushBatch(
   let pending = batch;
   while (pending.length > 0) {
     try {
-      const { results } = await authorized((token) =>
-        request<{ results: PushResult[] }>('/sync/push', {
-          method: 'POST',
-          token,
-          body: { deviceId: device, operations: pending.map(asPushOperation) },
-          timeoutMs: options.timeoutMs,
-        }),
-      );
+      const { results } = await authorized<{ results: PushResult[] }>('/sync/push', {
+        method: 'POST',
+        body: { deviceId: device, operations: pending.map(asPushOperation) },
+        timeoutMs: options.timeoutMs,
+      });
       const sent = results.filter((r) => r.status !== 'rejected').map((r) => r.opId);
       await markSent(sent);
       for (const r of results.filter((result) => result.status === 'rejected')) {
@@ -154,15 +139,12 @@ export async function uploadPhotos(options = DEFAULT_OPTIONS): Promise<number> {
   for (const photo of waiting) {
     if (!(await defectArrived(photo.defectId))) continue;
     try {
-      await authorized((token) => {
-        const form = new FormData();
-        form.append('file', photo.blob, `${photo.sha256}.${photo.mime.split('/')[1] ?? 'bin'}`);
-        return request(`/photos/${photo.sha256}`, {
-          method: 'PUT',
-          token,
-          body: form,
-          timeoutMs: options.photoTimeoutMs,
-        });
+      const form = new FormData();
+      form.append('file', photo.blob, `${photo.sha256}.${photo.mime.split('/')[1] ?? 'bin'}`);
+      await authorized(`/photos/${photo.sha256}`, {
+        method: 'PUT',
+        body: form,
+        timeoutMs: options.photoTimeoutMs,
       });
     } catch (error) {
       if (error instanceof ApiError && !error.retryable) {
@@ -181,11 +163,9 @@ export async function pullChanges(options = DEFAULT_OPTIONS): Promise<number> {
   let pulled = 0;
   for (;;) {
     const since = (await getMeta<number | string>('pullCursor')) ?? 0;
-    const answer = await authorized((token) =>
-      request<PullAnswer>(`/sync/pull?since=${encodeURIComponent(since)}&limit=${PULL_PAGE}`, {
-        token,
-        timeoutMs: options.timeoutMs,
-      }),
+    const answer = await authorized<PullAnswer>(
+      `/sync/pull?since=${encodeURIComponent(since)}&limit=${PULL_PAGE}`,
+      { timeoutMs: options.timeoutMs },
     );
     await db.transaction('rw', db.server, db.meta, async () => {
       // Later changes to the same id replace earlier ones, so a plain put in order is right.

@@ -12,7 +12,9 @@ export interface FakeRequest {
   init: RequestInit;
 }
 
-export type Interrupt = (request: FakeRequest) => Response | Promise<Response> | undefined;
+export type Interrupt = (
+  request: FakeRequest,
+) => Response | undefined | Promise<Response | undefined>;
 
 export function json(status: number, body: unknown): Response {
   return new Response(JSON.stringify(body), {

@@ -8,3 +8,4 @@ import '@ionic/react/css/display.css';
 import '@ionic/react/css/palettes/dark.class.css';
 import './fonts';
 import './variables.css';
+import './app.css';

@@ -1,0 +1,99 @@
+import { IonButton, IonItem, IonLabel, IonList, IonListHeader, IonNote } from '@ionic/react';
+import { useLiveQuery } from 'dexie-react-hooks';
+import { useEffect, useState } from 'react';
+import { Screen } from '../components/Screen';
+import { when } from '../components/time';
+import { describeOp } from '../inspect/describeOp';
+import { db } from '../offline/db';
+import { sendAgain } from '../offline/outbox';
+import { requestPersistentStorage } from '../offline/persist';
+import { syncScheduler } from '../offline/scheduler';
+import { useSyncState } from '../offline/useSyncState';
+
+const SHOWN = 50;
+
+function usePersisted(): boolean | undefined {
+  const [persisted, setPersisted] = useState<boolean>();
+  useEffect(() => {
+    void requestPersistentStorage().then(setPersisted);
+  }, []);
+  return persisted;
+}
+
+/** Everything still on this tablet only, and everything the server refused, with its reason. */
+export function SyncPage() {
+  const state = useSyncState();
+  const persisted = usePersisted();
+  const waiting = useLiveQuery(
+    () => db.outbox.where('state').equals('waiting').limit(SHOWN).sortBy('seq'),
+    [],
+  );
+  const people = useLiveQuery(() => db.people.toArray(), []);
+  const nameOf = (userId: string) => people?.find((p) => p.userId === userId)?.name ?? userId;
+
+  return (
+    <Screen title="Sending">
+      <p>
+        {state?.status?.lastSyncAt
+          ? `Last complete sync ${when(state.status.lastSyncAt)}.`
+          : 'Not synced yet.'}{' '}
+        {persisted === false &&
+          'The browser has not promised to keep this storage: send your work soon.'}
+        {persisted && 'The browser keeps this storage even when space runs low.'}
+      </p>
+      {state?.status?.error && (
+        <p className="field-error" role="alert">
+          {state.status.error}
+        </p>
+      )}
+      <IonButton onClick={() => void syncScheduler.syncNow()} disabled={state?.status?.running}>
+        Sync now
+      </IonButton>
+
+      <IonList>
+        <IonListHeader>Refused by the server</IonListHeader>
+        {state?.rejected.length === 0 && state.rejectedPhotos.length === 0 && (
+          <IonItem>
+            <IonLabel>Nothing refused.</IonLabel>
+          </IonItem>
+        )}
+        {state?.rejected.map((op) => (
+          <IonItem key={op.opId} data-testid="refused-op">
+            <IonLabel className="ion-text-wrap">
+              <h3>{describeOp(op)}</h3>
+              <p>
+                {nameOf(op.authorId)}, {when(op.createdAt)}
+              </p>
+              <p className="field-error">{op.reason}</p>
+            </IonLabel>
+            <IonButton slot="end" fill="outline" onClick={() => void sendAgain(op.opId)}>
+              Send again
+            </IonButton>
+          </IonItem>
+        ))}
+        {state?.rejectedPhotos.map((photo) => (
+          <IonItem key={photo.sha256}>
+            <IonLabel className="ion-text-wrap">
+              <h3>Photo of a defect</h3>
+              <p className="field-error">{photo.reason}</p>
+            </IonLabel>
+          </IonItem>
+        ))}
+      </IonList>
+
+      <IonList>
+        <IonListHeader>
+          Waiting to send ({state?.waitingRecords ?? 0} records, {state?.waitingPhotos ?? 0} photos)
+        </IonListHeader>
+        {waiting?.map((op) => (
+          <IonItem key={op.opId}>
+            <IonLabel>{describeOp(op)}</IonLabel>
+            <IonNote slot="end">
+              {nameOf(op.authorId)}, {when(op.createdAt)}
+            </IonNote>
+          </IonItem>
+        ))}
+      </IonList>
+    </Screen>
+  );
+}
