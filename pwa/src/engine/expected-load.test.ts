@@ -5,8 +5,9 @@ import { expectedLoad, type LoadCase } from './expected-load.js';
 import { centralDifference, relativeError } from './fixtures/finite-differences.js';
 import { LINDLEY_NATURAL_RUBBER, youngsModulusFromShoreA } from './hardness.js';
 
+const disc = { shape: 'disc', diameter: 100, thickness: 10 } as const;
 const pad: LoadCase = {
-  geometry: { shape: 'disc', diameter: 100, thickness: 10 },
+  geometry: disc,
   faces: 'bonded',
   model: { kind: 'mooney-rivlin', c10: 0.3, c01: 0.05 },
   nominalHardness: 50,
@@ -52,12 +53,12 @@ describe('expectedLoad F(δ) = A·Φ·|P(λ)| (REFERENCES §5)', () => {
     const h = 1e-5;
     const byDelta = centralDifference((d) => load({ ...pad, hardness: 53, deflection: d }), 1, h);
     const byT = centralDifference(
-      (t) => load({ ...pad, hardness: 53, geometry: { ...pad.geometry, thickness: t } }),
+      (t) => load({ ...pad, hardness: 53, geometry: { ...disc, thickness: t } }),
       10,
       h,
     );
     const byD = centralDifference(
-      (d) => load({ ...pad, hardness: 53, geometry: { ...pad.geometry, diameter: d } }),
+      (d) => load({ ...pad, hardness: 53, geometry: { ...disc, diameter: d } }),
       100,
       h,
     );
