@@ -48,5 +48,6 @@ export async function openBrowser(): Promise<BrowserSession> {
 /** Saves a screenshot of a main screen to the gitignored screenshots/ folder. */
 export async function screenshot(page: Page, name: string) {
   mkdirSync(screenshotDir, { recursive: true });
+  await page.evaluate(() => document.fonts.ready);
   await page.screenshot({ path: join(screenshotDir, `${name}.png`) });
 }
