@@ -67,30 +67,33 @@ export const LINDLEY_NATURAL_RUBBER: HardnessDefaults = {
   bulkModulus: 1150,
 };
 
+function tableEnds(defaults: HardnessDefaults): [HardnessDefaultsRow, HardnessDefaultsRow] {
+  const first = defaults.rows[0];
+  const last = defaults.rows.at(-1);
+  if (!first || !last) throw new EngineInputError('rows', 'the hardness table is empty');
+  return [first, last];
+}
+
 /**
- * Material factor k at a hardness, linear between the table's rows and held at the end rows
- * outside them (the caller flags that), evaluated in T so hardness sensitivities carry through.
+ * Material factor k at a hardness, linear between the table's rows (in ascending hardness) and
+ * held at the end rows outside them (the caller flags that), evaluated in T so hardness
+ * sensitivities carry through.
  */
 export function materialFactorOf<T extends Scalar<T>>(shoreA: T, defaults: HardnessDefaults): T {
-  const rows = defaults.rows;
-  const first = rows[0];
-  const last = rows[rows.length - 1];
-  if (!first || !last) throw new EngineInputError('rows', 'the hardness table is empty');
+  const [first, last] = tableEnds(defaults);
   if (shoreA.le(first.shoreA)) return shoreA.constant(first.materialFactor);
   if (shoreA.ge(last.shoreA)) return shoreA.constant(last.materialFactor);
-  const upper = rows.findIndex((row) => shoreA.lt(row.shoreA));
-  const hi = rows[upper] ?? last;
-  const lo = rows[upper - 1] ?? first;
+  const upper = defaults.rows.findIndex((row) => shoreA.lt(row.shoreA));
+  const hi = defaults.rows[upper] ?? last;
+  const lo = defaults.rows[upper - 1] ?? first;
   const slope = (hi.materialFactor - lo.materialFactor) / (hi.shoreA - lo.shoreA);
   return shoreA.sub(lo.shoreA).mul(slope).add(lo.materialFactor);
 }
 
 /** Whether a hardness lies inside the table's rows (outside, k is held at the end value). */
 export function insideDefaults(shoreA: number, defaults: HardnessDefaults): boolean {
-  const rows = defaults.rows;
-  return (
-    rows.length > 0 && shoreA >= (rows[0]?.shoreA ?? 0) && shoreA <= (rows.at(-1)?.shoreA ?? 0)
-  );
+  const [first, last] = tableEnds(defaults);
+  return shoreA >= first.shoreA && shoreA <= last.shoreA;
 }
 
 /** Median of hardness readings (the practice of 3 or 5 readings, REFERENCES §6). */

@@ -1,6 +1,6 @@
 import type { LoadTolerance } from './acceptance-windows.js';
 import type { BulkCorrection } from './compression-modulus.js';
-import { EngineInputError, requireInRange, requirePositive } from './errors.js';
+import { EngineInputError, requireFinite } from './errors.js';
 import type { LoadCase } from './expected-load.js';
 import type { DimensionName, Geometry } from './geometry.js';
 import type { MaterialModel } from './material-model.js';
@@ -68,7 +68,13 @@ export interface PartMeasurement {
 
 /** The load tolerance as percent below and above. */
 export function specLoadTolerance(spec: PartSpec): LoadTolerance {
-  const percent = requireInRange('loadTolerancePercent', spec.loadTolerancePercent, 0, 99.999);
+  const percent = spec.loadTolerancePercent;
+  if (!(requireFinite('loadTolerancePercent', percent) >= 0 && percent < 100)) {
+    throw new EngineInputError(
+      'loadTolerancePercent',
+      `must lie in 0 up to below 100 %, got ${percent}`,
+    );
+  }
   return { minusPercent: percent, plusPercent: percent };
 }
 
@@ -78,7 +84,6 @@ export function specLoadCase(spec: PartSpec, hardness?: number, geometry?: Geome
   if (unbondedFaces !== 'friction' && unbondedFaces !== 'lubricated') {
     throw new EngineInputError('unbondedFaces', `must be 'friction' or 'lubricated'`);
   }
-  requirePositive('hardness.tolerance', spec.hardness.tolerance);
   return {
     geometry: geometry ?? spec.geometry,
     faces: spec.bonded ? 'bonded' : unbondedFaces === 'friction' ? 'unbonded' : 'lubricated',

@@ -48,8 +48,8 @@ describe('code letters (ISO 2859-1 Table 1)', () => {
     expect(codeLetterFor(lot, 'II')).toBe(letter);
   });
 
-  // Levels I and III by row (REFERENCES §9 [M] from memory; the same rows appear in the
-  // wisetool.com and scribd reproductions of Table I).
+  // Levels I and III by row: REFERENCES §9 gives them [M] from memory; they agree with Table I as
+  // reproduced in the "AQL Sampling Chart" at pdfcoffee.com and wisetool.com/sampling.htm [S].
   const lots = [5, 12, 20, 40, 70, 120, 200, 400, 1000, 2000, 5000, 20000, 100000, 300000, 600000];
   it('level I rows: A A B C C D E F G H J K L M N', () => {
     expect(lots.map((n) => codeLetterFor(n, 'I')).join('')).toBe('AABCCDEFGHJKLMN');

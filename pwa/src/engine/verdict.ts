@@ -77,6 +77,7 @@ export interface PreparedSpec {
 export function prepareSpec(spec: PartSpec, options: VerdictOptions = {}): PreparedSpec {
   const nearFraction = requireInRange('nearFraction', options.nearFraction ?? 0.1, 0, 0.5);
   const tolerance = specLoadTolerance(spec);
+  requirePositive('hardness.tolerance', spec.hardness.tolerance);
   const loadCase = specLoadCase(spec);
   const expected = expectedLoad(loadCase);
   if (spec.compressionSetLimitPercent !== undefined) {
