@@ -89,14 +89,7 @@ export const ROUTES: readonly AppRoute[] = [...workRoutes, ...adminRoutes];
 
 /** The side menu, in the order a person of each role reaches for things. */
 const NAV: readonly NavEntry[] = [
-  { path: '/presses', roles: AT_THE_PRESS, label: 'Presses', icon: albumsOutline, section: 'Work' },
-  {
-    path: '/desk',
-    roles: DESK_ROLES,
-    label: 'Quality desk',
-    icon: flaskOutline,
-    section: 'Desk',
-  },
+  { path: '/desk', roles: DESK_ROLES, label: 'Quality desk', icon: flaskOutline, section: 'Desk' },
   {
     path: '/review',
     roles: REVIEWERS,
@@ -104,6 +97,7 @@ const NAV: readonly NavEntry[] = [
     icon: alertCircleOutline,
     section: 'Work',
   },
+  { path: '/presses', roles: AT_THE_PRESS, label: 'Presses', icon: albumsOutline, section: 'Work' },
   {
     path: '/sync',
     roles: AT_THE_PRESS,
