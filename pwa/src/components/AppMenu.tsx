@@ -3,32 +3,37 @@ import {
   IonContent,
   IonHeader,
   IonIcon,
-  IonItem,
-  IonLabel,
-  IonList,
-  IonListHeader,
   IonMenu,
   IonMenuToggle,
-  IonSegment,
-  IonSegmentButton,
   IonTitle,
   IonToolbar,
   useIonAlert,
 } from '@ionic/react';
-import { useLocation, useNavigate } from 'react-router-dom';
+import { NavLink, useNavigate } from 'react-router-dom';
 import { leaveDevice, setUnits, useSession } from '../auth/session';
 import { signOut } from '../auth/tokens';
 import type { UnitSystem } from '../offline/db';
 import { navFor, type NavEntry } from '../routes';
 import { useColorScheme, type ColorScheme } from '../theme/colorScheme';
+import { Segmented } from './Segmented';
 import './app-menu.css';
 
 const SECTIONS: NavEntry['section'][] = ['Work', 'Desk', 'Administration'];
 
+const UNIT_CHOICES: { value: UnitSystem; label: string }[] = [
+  { value: 'metric', label: 'mm · N' },
+  { value: 'imperial', label: 'in · lbf' },
+];
+
+const SCHEME_CHOICES: { value: ColorScheme; label: string }[] = [
+  { value: 'device', label: 'Auto' },
+  { value: 'light', label: 'Light' },
+  { value: 'dark', label: 'Dark' },
+];
+
 /** Side menu: the person's pages by role, their units, the theme, and handing over the tablet. */
 export function AppMenu({ contentId }: { contentId: string }) {
   const { person } = useSession();
-  const { pathname } = useLocation();
   const navigate = useNavigate();
   const [scheme, setScheme] = useColorScheme();
   const [confirm] = useIonAlert();
@@ -64,28 +69,25 @@ export function AppMenu({ contentId }: { contentId: string }) {
         </IonToolbar>
       </IonHeader>
       <IonContent>
-        {SECTIONS.map((section) => {
-          const inSection = entries.filter((entry) => entry.section === section);
-          if (inSection.length === 0) return null;
-          return (
-            <IonList key={section}>
-              <IonListHeader>{section}</IonListHeader>
-              {inSection.map(({ path, label, icon }) => (
-                <IonMenuToggle key={path} autoHide={false}>
-                  <IonItem
-                    button
-                    routerLink={path}
-                    detail={false}
-                    color={pathname.startsWith(path) ? 'light' : undefined}
-                  >
-                    <IonIcon icon={icon} slot="start" aria-hidden />
-                    <IonLabel>{label}</IonLabel>
-                  </IonItem>
-                </IonMenuToggle>
-              ))}
-            </IonList>
-          );
-        })}
+        <nav aria-label="Pages">
+          {SECTIONS.map((section) => {
+            const inSection = entries.filter((entry) => entry.section === section);
+            if (inSection.length === 0) return null;
+            return (
+              <div key={section} className="app-menu-section">
+                <h2>{section}</h2>
+                {inSection.map(({ path, label, icon }) => (
+                  <IonMenuToggle key={path} autoHide={false}>
+                    <NavLink to={path} className="app-menu-link">
+                      <IonIcon icon={icon} aria-hidden />
+                      {label}
+                    </NavLink>
+                  </IonMenuToggle>
+                ))}
+              </div>
+            );
+          })}
+        </nav>
         {person && (
           <div className="app-menu-person">
             <p>
@@ -93,23 +95,13 @@ export function AppMenu({ contentId }: { contentId: string }) {
               <br />
               {person.role}
             </p>
-            <p className="app-menu-label">Units</p>
-            <IonSegment
+            <Segmented
+              label="Units"
               value={person.units}
-              onIonChange={(e) => void setUnits(person.userId, e.detail.value as UnitSystem)}
-            >
-              <IonSegmentButton value="metric">mm · N</IonSegmentButton>
-              <IonSegmentButton value="imperial">in · lbf</IonSegmentButton>
-            </IonSegment>
-            <p className="app-menu-label">Theme</p>
-            <IonSegment
-              value={scheme}
-              onIonChange={(e) => setScheme(e.detail.value as ColorScheme)}
-            >
-              <IonSegmentButton value="device">Auto</IonSegmentButton>
-              <IonSegmentButton value="light">Light</IonSegmentButton>
-              <IonSegmentButton value="dark">Dark</IonSegmentButton>
-            </IonSegment>
+              options={UNIT_CHOICES}
+              onChange={(units) => void setUnits(person.userId, units)}
+            />
+            <Segmented label="Theme" value={scheme} options={SCHEME_CHOICES} onChange={setScheme} />
             <IonMenuToggle autoHide={false}>
               <IonButton expand="block" onClick={() => void handOver()}>
                 Hand over the tablet

@@ -1,4 +1,4 @@
-import { IonButton, IonItem, IonLabel, IonList, IonListHeader, IonNote } from '@ionic/react';
+import { IonButton } from '@ionic/react';
 import { useLiveQuery } from 'dexie-react-hooks';
 import { useEffect, useState } from 'react';
 import { Screen } from '../components/Screen';
@@ -50,50 +50,48 @@ export function SyncPage() {
         Sync now
       </IonButton>
 
-      <IonList>
-        <IonListHeader>Refused by the server</IonListHeader>
+      <h2 className="section-title">Refused by the server</h2>
+      <ul className="plain-list">
         {state?.rejected.length === 0 && state.rejectedPhotos.length === 0 && (
-          <IonItem>
-            <IonLabel>Nothing refused.</IonLabel>
-          </IonItem>
+          <li>Nothing refused.</li>
         )}
         {state?.rejected.map((op) => (
-          <IonItem key={op.opId} data-testid="refused-op">
-            <IonLabel className="ion-text-wrap">
+          <li key={op.opId} data-testid="refused-op">
+            <div>
               <h3>{describeOp(op)}</h3>
               <p>
                 {nameOf(op.authorId)}, {when(op.createdAt)}
               </p>
               <p className="field-error">{op.reason}</p>
-            </IonLabel>
-            <IonButton slot="end" fill="outline" onClick={() => void sendAgain(op.opId)}>
+            </div>
+            <IonButton fill="outline" onClick={() => void sendAgain(op.opId)}>
               Send again
             </IonButton>
-          </IonItem>
+          </li>
         ))}
         {state?.rejectedPhotos.map((photo) => (
-          <IonItem key={photo.sha256}>
-            <IonLabel className="ion-text-wrap">
+          <li key={photo.sha256}>
+            <div>
               <h3>Photo of a defect</h3>
               <p className="field-error">{photo.reason}</p>
-            </IonLabel>
-          </IonItem>
+            </div>
+          </li>
         ))}
-      </IonList>
+      </ul>
 
-      <IonList>
-        <IonListHeader>
-          Waiting to send ({state?.waitingRecords ?? 0} records, {state?.waitingPhotos ?? 0} photos)
-        </IonListHeader>
+      <h2 className="section-title">
+        Waiting to send ({state?.waitingRecords ?? 0} records, {state?.waitingPhotos ?? 0} photos)
+      </h2>
+      <ul className="plain-list">
         {waiting?.map((op) => (
-          <IonItem key={op.opId}>
-            <IonLabel>{describeOp(op)}</IonLabel>
-            <IonNote slot="end">
+          <li key={op.opId}>
+            <span>{describeOp(op)}</span>
+            <span>
               {nameOf(op.authorId)}, {when(op.createdAt)}
-            </IonNote>
-          </IonItem>
+            </span>
+          </li>
         ))}
-      </IonList>
+      </ul>
     </Screen>
   );
 }

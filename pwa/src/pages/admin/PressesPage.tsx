@@ -1,4 +1,4 @@
-import { IonButton, IonToggle } from '@ionic/react';
+import { IonButton } from '@ionic/react';
 import { useForm } from 'react-hook-form';
 import { useAdminPresses, useCreatePress, useUpdatePress } from '../../api/admin';
 import type { Press, PressKind } from '../../api/types';
@@ -77,12 +77,14 @@ function PressRow({ press }: { press: Press }) {
       <td>{press.kind}</td>
       <td className="num">{press.clampForceKn ?? '—'}</td>
       <td>
-        <IonToggle
-          checked={press.active}
-          onIonChange={(event) => update.mutate({ id: press.id, active: event.detail.checked })}
-        >
+        <label className="check">
+          <input
+            type="checkbox"
+            checked={press.active}
+            onChange={(event) => update.mutate({ id: press.id, active: event.target.checked })}
+          />
           In use
-        </IonToggle>
+        </label>
         {update.error && <div className="field-error">{describeSyncError(update.error)}</div>}
       </td>
     </tr>
