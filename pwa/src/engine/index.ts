@@ -35,6 +35,17 @@ export {
   tangentStiffness,
 } from './stress.js';
 
+// Fitting and material stability (REFERENCES §4)
+export {
+  fitModel,
+  type FitObjective,
+  type FitOptions,
+  type FitPoint,
+  type FitResult,
+} from './fit.js';
+export { type StopReason } from './levenberg-marquardt.js';
+export { druckerHessian, stabilityOf, type PathStability, type Stability } from './stability.js';
+
 // Compression set and aging (REFERENCES §7)
 export { compressionSetPercent, type CompressionSetReading } from './compression-set.js';
 export {
