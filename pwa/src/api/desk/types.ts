@@ -156,7 +156,6 @@ export interface MeasurementRow {
   lotId: string;
   lotNumber: string;
   specRevisionId: string;
-  revision: number;
   pressId: string;
   pressCode: string;
   cavity: number;

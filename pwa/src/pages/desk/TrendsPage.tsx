@@ -87,7 +87,7 @@ export default function TrendsPage() {
       </div>
       {specId ? (
         <QueryState query={measurements} what="the measurements">
-          {({ rows }) => (
+          {(rows) => (
             <TrendCharts
               rows={rows}
               characteristic={characteristic}

@@ -16,7 +16,7 @@ export function CsvSource({ onText }: Props) {
   }
 
   return (
-    <div className="desk-row desk-row--wrap">
+    <div className="desk-row desk-row--wrap desk-row--top">
       <div className="desk-field">
         <label htmlFor={fileId}>CSV file from the lab</label>
         <input

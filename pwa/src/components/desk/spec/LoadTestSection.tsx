@@ -18,7 +18,14 @@ export function LoadTestSection({ fields, problems, onChange, readOnly, compound
         <DeskSelect
           label="Compound"
           value={fields.compoundId}
-          onChange={(compoundId) => onChange({ compoundId })}
+          onChange={(compoundId) => {
+            // The spec's nominal hardness is the one the compound's constants were fitted at.
+            const chosen = compounds.find((c) => c.id === compoundId);
+            onChange({
+              compoundId,
+              ...(chosen ? { hardnessNominal: String(chosen.hardnessShoreA) } : {}),
+            });
+          }}
           options={[
             ['', 'choose a compound'],
             ...compounds.map((c): [string, string] => [

@@ -9,7 +9,6 @@ function row(lot: string, day: number, load: number | null, sampleIndex: number)
     lotId: lot,
     lotNumber: `L-${lot}`,
     specRevisionId: 'rev',
-    revision: 1,
     pressId: 'p1',
     pressCode: 'P1',
     cavity: 1,
