@@ -11,6 +11,7 @@ type Loader = () => Promise<{ default: ComponentType }>;
 const loaders: [path: string, load: Loader][] = [
   ['/desk/compounds', () => import('./CompoundsPage')],
   ['/desk/compounds/:compoundId', () => import('./CompoundPage')],
+  ['/desk/compounds/:compoundId/fit', () => import('./FitPage')],
   ['/desk/formulas', () => import('./FormulaModelsPage')],
   ['/desk/aging', () => import('./AgingPage')],
   ['/desk/specs', () => import('./SpecsPage')],
