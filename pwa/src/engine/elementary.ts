@@ -52,8 +52,10 @@ export const jets = {
   },
   /** a^p for a real exponent p other than 0 and 1 (those are handled by the callers). */
   power(a: number, p: number): Jet {
-    const q = a ** (p - 2);
-    const first = q * a;
-    return [first * a, p * first, p * (p - 1) * q];
+    if (a === 0) return [0, p * 0 ** (p - 1), p * (p - 1) * 0 ** (p - 2)];
+    // From the value down, so a large |a| with p < 0 does not underflow a^(p−2) first.
+    const value = a ** p;
+    const first = (p * value) / a;
+    return [value, first, ((p - 1) * first) / a];
   },
 };

@@ -2,6 +2,7 @@ import { EngineInputError } from './errors.js';
 import {
   levenbergMarquardt,
   type LeastSquaresProblem,
+  type LevenbergMarquardtResult,
   type StopReason,
 } from './levenberg-marquardt.js';
 import { linearLeastSquares } from './least-squares.js';
@@ -142,6 +143,21 @@ function fitProblem(
   };
 }
 
+/** Residual evaluations each Ogden start gets before the best one is carried on. */
+const SCREENING_EVALUATIONS = 25;
+
+/** A run continued from where `first` stopped, counted as one. */
+function continueFrom(
+  first: LevenbergMarquardtResult,
+  second: LevenbergMarquardtResult,
+): LevenbergMarquardtResult {
+  return {
+    ...second,
+    iterations: first.iterations + second.iterations,
+    evaluations: first.evaluations + second.evaluations,
+  };
+}
+
 /** Exponent sets tried besides the given start for an N-term Ogden fit. */
 function ogdenExponentStarts(given: readonly number[]): number[][] {
   const n = given.length;
@@ -235,11 +251,23 @@ export function fitModel(options: FitOptions): FitResult {
           ),
         ]
       : [start];
-  const runs = candidates.flatMap((candidate) => {
+  // Each start gets a short run; the most promising one is carried on to convergence.
+  const screened = candidates.flatMap((candidate) => {
     const x0 = parametersOf(candidate);
-    return problem.residuals(x0) ? [levenbergMarquardt(problem, x0)] : [];
+    if (!problem.residuals(x0)) return [];
+    return [
+      levenbergMarquardt(
+        problem,
+        x0,
+        candidates.length > 1 ? { maxEvaluations: SCREENING_EVALUATIONS } : {},
+      ),
+    ];
   });
-  const best = runs.reduce((a, b) => (b.cost < a.cost ? b : a));
+  const leader = screened.reduce((a, b) => (b.cost < a.cost ? b : a));
+  const best =
+    leader.stopReason === 'max-evaluations' && candidates.length > 1
+      ? continueFrom(leader, levenbergMarquardt(problem, leader.x))
+      : leader;
   const model = withParameters<number>(start, best.x);
   const mu0 = initialShearModulus(model);
   return {

@@ -24,10 +24,26 @@ export function inverseLangevin<T extends Scalar<T>>(y: T): T {
     if (iteration === 50)
       throw new EngineInputError('stretch', 'inverse Langevin did not converge');
     const langevin = beta.coth().sub(beta.constant(1).div(beta));
-    const slope = beta.pow(-2).sub(beta.sinh().pow(-2));
+    const slope = beta.pow(-2).sub(cschSquared(beta));
     const step = langevin.sub(y).div(slope);
     beta = beta.sub(step);
     if (Math.abs(step.re) <= 1e-12 * beta.re) settledSteps++;
   }
   return beta;
+}
+
+/** Above this β, sinh β is written through e^(−2β) so it neither overflows nor underflows. */
+const LARGE_BETA = 20;
+
+/** 1/sinh²β. */
+function cschSquared<T extends Scalar<T>>(beta: T): T {
+  if (beta.lt(LARGE_BETA)) return beta.sinh().pow(-2);
+  const e = beta.mul(-2).exp();
+  return e.mul(4).div(e.sub(1).pow(2));
+}
+
+/** ln sinh β = β − ln 2 + ln(1 − e^(−2β)) at large β. */
+export function logSinh<T extends Scalar<T>>(beta: T): T {
+  if (beta.lt(LARGE_BETA)) return beta.sinh().log();
+  return beta.sub(Math.LN2).add(beta.mul(-2).exp().neg().add(1).log());
 }

@@ -11,6 +11,13 @@ import { realPart, STEP, type Liftable, type LiftedFunction, type Scalar } from 
  * do not depend on the stepped quantities (stretches, invariants) as cheap as plain complex.
  */
 
+/** A MultiComplex or number as a LiftedMultiComplex with nothing on i₀. */
+function liftMultiComplex(value: MultiComplex | number): LiftedMultiComplex {
+  return typeof value === 'number'
+    ? new LiftedMultiComplex(value, 0, null)
+    : new LiftedMultiComplex(value.re, 0, value.liftedParts());
+}
+
 /** Per-unit parts; null when all are zero. */
 export type Parts = readonly number[] | null;
 
@@ -146,13 +153,16 @@ export class MultiComplex implements Liftable<MultiComplex> {
 
   /** The new step rides on an extra unit i₀; the result's parts are ∂(dg/dx)/∂(each unit). */
   derivativeOf(g: LiftedFunction<MultiComplex>): MultiComplex {
-    const lift = (value: MultiComplex | number) =>
-      typeof value === 'number'
-        ? new LiftedMultiComplex(value, 0, null)
-        : new LiftedMultiComplex(value.re, 0, withZeroCross(value.parts));
-    const result = g(new LiftedMultiComplex(this.re, STEP, withZeroCross(this.parts)), lift);
+    const result = g(new LiftedMultiComplex(this.re, STEP, this.liftedParts()), liftMultiComplex);
     return new MultiComplex(result.lifted / STEP, scaled(result.cross, 1 / STEP));
   }
+
+  /** The parts laid out as LiftedMultiComplex keeps them (cross parts zero), built once. */
+  liftedParts(): Parts {
+    if (this.lifted === undefined) this.lifted = withZeroCross(this.parts);
+    return this.lifted;
+  }
+  private lifted: Parts | undefined;
 
   private power(p: number): MultiComplex {
     if (p === 0) return this.constant(1);

@@ -1,6 +1,10 @@
 import { Complex } from './complex.js';
 import { realPart, STEP, type Liftable, type LiftedFunction } from './scalar.js';
 
+function liftReal(value: Real | number): Complex {
+  return new Complex(realPart(value), 0);
+}
+
 /** A plain real number behind the scalar interface, for evaluating generic formulas. */
 export class Real implements Liftable<Real> {
   constructor(readonly re: number) {}
@@ -73,7 +77,7 @@ export class Real implements Liftable<Real> {
   }
 
   derivativeOf(g: LiftedFunction<Real>): Real {
-    const result = g(new Complex(this.re, STEP), (value) => new Complex(realPart(value), 0));
+    const result = g(new Complex(this.re, STEP), liftReal);
     return new Real(result.im / STEP);
   }
 }

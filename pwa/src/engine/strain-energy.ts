@@ -1,5 +1,5 @@
 import { formulaEnergy } from './formula.js';
-import { inverseLangevin } from './inverse-langevin.js';
+import { inverseLangevin, logSinh } from './inverse-langevin.js';
 import type { ModelOf, OgdenTerm } from './material-model.js';
 import type { Scalar } from './scalar.js';
 
@@ -27,7 +27,9 @@ function ogden<T extends Scalar<T>>(
 function arrudaBoyce<T extends Scalar<T>>(mu: T | number, n: T | number, i1: T): T {
   const x = i1.div(n).div(3).sqrt();
   const beta = inverseLangevin(x);
-  return beta.mul(x).add(beta.div(beta.sinh()).log()).mul(n).mul(mu);
+  // ln(β / sinh β) as ln β − ln sinh β: near locking the ratio itself is tiny enough for its
+  // second-order parts to underflow.
+  return beta.mul(x).add(beta.log()).sub(logSinh(beta)).mul(n).mul(mu);
 }
 
 /** W of `model` at principal stretches `stretches`, evaluated in T. */
