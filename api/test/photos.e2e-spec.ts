@@ -19,7 +19,12 @@ const PNG = Buffer.from(
   'hex',
 );
 const JPEG = Buffer.concat([Buffer.from([0xff, 0xd8, 0xff, 0xe0]), Buffer.alloc(64, 1)]);
-const WEBP = Buffer.concat([Buffer.from('RIFF'), Buffer.from([36, 0, 0, 0]), Buffer.from('WEBPVP8 '), Buffer.alloc(28)]);
+const WEBP = Buffer.concat([
+  Buffer.from('RIFF'),
+  Buffer.from([36, 0, 0, 0]),
+  Buffer.from('WEBPVP8 '),
+  Buffer.alloc(28),
+]);
 
 const put = (name: string, bytes: Buffer, filename = 'photo.png', contentType = 'image/png') =>
   h
@@ -54,7 +59,10 @@ test.each([
 });
 
 test('reading a photo needs a sign-in', async () => {
-  await h.http().get(`/api/photos/${sha(PNG)}`).expect(401);
+  await h
+    .http()
+    .get(`/api/photos/${sha(PNG)}`)
+    .expect(401);
 });
 
 test('text under a .png name with an image type is refused by its content', async () => {
@@ -74,7 +82,11 @@ test('more than 10 MB is refused with 413', async () => {
 });
 
 test('a request without the file is a 400 naming it; extra form fields are refused', async () => {
-  const bare = await h.http().put(`/api/photos/${sha(PNG)}`).auth(token, { type: 'bearer' }).expect(400);
+  const bare = await h
+    .http()
+    .put(`/api/photos/${sha(PNG)}`)
+    .auth(token, { type: 'bearer' })
+    .expect(400);
   expect(bare.body.field).toBe('file');
   await h
     .http()
@@ -93,9 +105,12 @@ test.each([
   sha(PNG).slice(1),
   `${sha(PNG)}.png`,
   `${sha(PNG).slice(0, 60)}%00abc`,
-])('a name that is not a lowercase SHA-256 (%s) is refused and nothing is written', async (name) => {
-  const before = readdirSync(h.config.dataDir).sort();
-  const res = await put(name, PNG);
-  expect([400, 404]).toContain(res.status);
-  expect(readdirSync(h.config.dataDir).sort()).toEqual(before);
-});
+])(
+  'a name that is not a lowercase SHA-256 (%s) is refused and nothing is written',
+  async (name) => {
+    const before = readdirSync(h.config.dataDir).sort();
+    const res = await put(name, PNG);
+    expect([400, 404]).toContain(res.status);
+    expect(readdirSync(h.config.dataDir).sort()).toEqual(before);
+  },
+);

@@ -4,6 +4,20 @@ import { LessThan, Repository, type EntityManager, type FindOptionsWhere } from 
 import type { AuditQueryDto } from './dto/audit-query.dto.js';
 import { AuditEntry } from './entities/audit-entry.entity.js';
 
+export type AuditRow = Omit<AuditEntry, 'id'>;
+
+/** An entry for what `ctx.authorId` did, stamped now, to be written with `recordMany`. */
+export function auditRow(
+  ctx: { authorId: string },
+  action: string,
+  entity: string,
+  entityId: string,
+  before: object | null,
+  after: object | null,
+): AuditRow {
+  return { at: new Date(), actorId: ctx.authorId, action, entity, entityId, before, after };
+}
+
 @Injectable()
 export class AuditService {
   constructor(@InjectRepository(AuditEntry) private readonly entries: Repository<AuditEntry>) {}
@@ -27,6 +41,19 @@ export class AuditService {
       before,
       after,
     });
+  }
+
+  /** Many entries in few statements (SQLite caps the values bound to one statement). */
+  async recordMany(manager: EntityManager, rows: AuditRow[]): Promise<void> {
+    for (let i = 0; i < rows.length; i += 100) {
+      await manager
+        .createQueryBuilder()
+        .insert()
+        .into(AuditEntry)
+        .values(rows.slice(i, i + 100))
+        .updateEntity(false)
+        .execute();
+    }
   }
 
   list({ entity, entityId, before, limit }: AuditQueryDto): Promise<AuditEntry[]> {

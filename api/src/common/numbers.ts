@@ -1,15 +1,25 @@
 import { applyDecorators } from '@nestjs/common';
-import { IsInt, IsNumber, Max, Min } from 'class-validator';
+import { IsInt, Max, Min, ValidateBy, buildMessage } from 'class-validator';
 
 /**
  * A finite number (no NaN, no Infinity, no numeric string) within a physical range, both ends
- * included; `each` applies it to every item of an array.
+ * included; `each` applies it to every item of an array. One check rather than three, because
+ * a sync push validates thousands of these.
  */
 export const Finite = (min: number, max: number, each = false) =>
-  applyDecorators(
-    IsNumber({ allowNaN: false, allowInfinity: false }, { each }),
-    Min(min, { each }),
-    Max(max, { each }),
+  ValidateBy(
+    {
+      name: 'finiteInRange',
+      constraints: [min, max],
+      validator: {
+        validate: (value: unknown) =>
+          typeof value === 'number' && Number.isFinite(value) && value >= min && value <= max,
+        defaultMessage: buildMessage(
+          (prefix) => `${prefix}$property must be a finite number from ${min} to ${max}`,
+        ),
+      },
+    },
+    { each },
   );
 
 export const WholeNumber = (min: number, max: number) =>

@@ -1,6 +1,18 @@
 import { BadRequestException, ValidationPipe, type ValidationError } from '@nestjs/common';
-import { plainToInstance, type ClassConstructor } from 'class-transformer';
-import { validate } from 'class-validator';
+import { useContainer } from 'class-validator';
+
+/**
+ * class-validator looks up a constraint's instance for every check it makes, and its own store
+ * does so by a linear search over every constraint class ever declared (one per decorated
+ * property): a sync push of 200 parts spent most of its time there. A map does the same job.
+ */
+const constraints = new Map<unknown, unknown>();
+useContainer({
+  get<T>(type: new () => T): T {
+    if (!constraints.has(type)) constraints.set(type, new type());
+    return constraints.get(type) as T;
+  },
+});
 
 export interface FieldProblem {
   field: string;
@@ -29,26 +41,14 @@ export function badInput(problems: FieldProblem[]): BadRequestException {
   });
 }
 
-const OPTIONS = { whitelist: true, forbidNonWhitelisted: true, forbidUnknownValues: true } as const;
+export const VALIDATION_OPTIONS = {
+  whitelist: true,
+  forbidNonWhitelisted: true,
+  forbidUnknownValues: true,
+} as const;
 
 export const validationPipe = new ValidationPipe({
-  ...OPTIONS,
+  ...VALIDATION_OPTIONS,
   transform: true,
   exceptionFactory: (errors) => badInput(fieldProblems(errors)),
 });
-
-/**
- * Validates a nested payload the same way the global pipe validates bodies; used where one bad
- * item must be reported by itself instead of failing the whole request (sync operations).
- */
-export async function validated<T extends object>(
-  type: ClassConstructor<T>,
-  plain: unknown,
-): Promise<{ value: T } | { problems: FieldProblem[] }> {
-  if (typeof plain !== 'object' || plain === null || Array.isArray(plain)) {
-    return { problems: [{ field: 'payload', messages: ['payload must be an object'] }] };
-  }
-  const value = plainToInstance(type, plain);
-  const errors = await validate(value, OPTIONS);
-  return errors.length ? { problems: fieldProblems(errors, 'payload') } : { value };
-}

@@ -48,6 +48,7 @@ export class CompoundsService {
     return this.transactions.run(async (manager) => {
       const compound: Compound = {
         id: randomUUID(),
+        bulkModulusMPa: null,
         ...dto,
         currentFitId: null,
         createdAt: new Date(),

@@ -13,7 +13,7 @@ import { Lot } from '../lots/entities/lot.entity.js';
 import { OutgoingMail } from '../mail/entities/outgoing-mail.entity.js';
 import { Photo } from '../photos/entities/photo.entity.js';
 import { Press } from '../presses/entities/press.entity.js';
-import { PartSpec } from '../specs/entities/part-spec.entity.js';
+import { Spec } from '../specs/entities/spec.entity.js';
 import { SpecRevision } from '../specs/entities/spec-revision.entity.js';
 import { AppliedOp } from '../sync/entities/applied-op.entity.js';
 import { Change } from '../changes/entities/change.entity.js';
@@ -28,7 +28,7 @@ export const ENTITIES = [
   Compound,
   TestSet,
   CompoundFit,
-  PartSpec,
+  Spec,
   SpecRevision,
   Lot,
   Disposition,
@@ -52,6 +52,8 @@ export function dataSourceOptions(dataDir: string): DataSourceOptions {
     type: 'better-sqlite3',
     database: databaseFile(dataDir),
     enableWAL: true,
+    // Prepared statements are reused by their SQL; the default 100 is fewer than this app uses.
+    statementCacheSize: 1000,
     entities: ENTITIES,
     migrations: MIGRATIONS,
     migrationsTransactionMode: 'each',

@@ -3,7 +3,6 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import {
   Between,
-  In,
   IsNull,
   LessThanOrEqual,
   MoreThanOrEqual,
@@ -11,15 +10,16 @@ import {
   type EntityManager,
   type FindOptionsWhere,
 } from 'typeorm';
-import { AuditService } from '../audit/audit.service.js';
 import { ChangeFeed } from '../changes/change-feed.service.js';
 import { Transactions } from '../database/transactions.js';
-import { lotDecision, samplingPlan } from '../engine.js';
+import { lotVerdict, partVerdict, samplingPlan, type PartVerdict } from '../engine.js';
 import { Defect } from '../inspections/entities/defect.entity.js';
 import { Inspection } from '../inspections/entities/inspection.entity.js';
 import { MailService } from '../mail/mail.service.js';
 import { Press } from '../presses/entities/press.entity.js';
 import { SpecRevision } from '../specs/entities/spec-revision.entity.js';
+import { SpecsService } from '../specs/specs.service.js';
+import { AuditService, auditRow } from '../audit/audit.service.js';
 import { OpRejected, type OpContext } from '../sync/op-context.js';
 import type { LotOpenPayload, LotSubmitPayload } from '../sync/dto/operations.dto.js';
 import { User } from '../users/entities/user.entity.js';
@@ -47,6 +47,7 @@ export class LotsService {
     private readonly audit: AuditService,
     private readonly feed: ChangeFeed,
     private readonly mail: MailService,
+    private readonly specs: SpecsService,
     @InjectRepository(Lot) private readonly lots: Repository<Lot>,
   ) {}
 
@@ -115,20 +116,22 @@ export class LotsService {
       inspected: 0,
       nonconforming: 0,
       serverVerdict: 'pending',
+      verdictReason: '',
       deviceVerdict: null,
       submittedAt: null,
       flaggedAt: null,
       dispositionAction: null,
     };
     await manager.insert(Lot, lot);
-    await this.audit.record(manager, ctx.authorId, 'lot.open', 'lot', lot.id, null, lot);
     await this.feed.publish(manager, 'lot', lot.id, lot);
+    ctx.batch.audit.push(auditRow(ctx, 'lot.open', 'lot', lot.id, null, lot));
+    ctx.batch.lots.set(lot.id, lot);
     return lot.id;
   }
 
   /** `lot.submit`: the inspector is done; the device's own verdict is kept beside the server's. */
   async submit(ctx: OpContext, p: LotSubmitPayload): Promise<string> {
-    const before = await this.openLot(ctx.manager, p.lotId);
+    const before = await this.openLot(ctx, p.lotId);
     const patch = {
       status: 'submitted' as const,
       deviceVerdict: {
@@ -137,66 +140,63 @@ export class LotsService {
       },
       submittedAt: ctx.recordedAt,
     };
+    const after: Lot = { ...before, ...patch };
     await ctx.manager.update(Lot, { id: before.id }, patch);
-    await this.audit.record(ctx.manager, ctx.authorId, 'lot.submit', 'lot', before.id, before, {
-      ...before,
-      ...patch,
-    });
+    ctx.batch.audit.push(auditRow(ctx, 'lot.submit', 'lot', before.id, before, after));
+    ctx.batch.lots.set(after.id, after);
     return before.id;
   }
 
   /** The lot, if it exists and still takes records. */
-  async openLot(manager: EntityManager, id: string): Promise<Lot> {
-    const lot = await manager.findOneBy(Lot, { id });
+  async openLot(ctx: OpContext, id: string): Promise<Lot> {
+    const lot = ctx.batch.lots.get(id) ?? (await ctx.manager.findOneBy(Lot, { id }));
     if (!lot)
       throw new OpRejected(`lot ${id} is not known to the server (push its lot.open first)`);
+    ctx.batch.lots.set(id, lot);
     if (lot.status !== 'open') throw new OpRejected(`lot ${lot.lotNumber} is already submitted`);
     return lot;
   }
 
   /**
-   * Counts a lot's current sampled parts against its plan after a batch touched it. A part is
-   * nonconforming when the server's verdict says so or when a critical or major defect was
-   * recorded on it (under any revision of its record). The first time the reject number is
-   * reached the lot is flagged and the supervisors are mailed; the mail's key keeps it to one.
+   * Judges a lot again after a batch touched it: the engine's lot verdict over its current
+   * sampled parts. Each part's stored server verdict covers its measurements; a part with
+   * defects recorded on it (under any revision of its record) is judged again with them. The
+   * first time the lot is rejected it is flagged and the supervisors are mailed, once: the mail's
+   * key makes a second flag of the same lot a no-op.
    */
   async recount(manager: EntityManager, lotId: string): Promise<void> {
     const lot = await manager.findOneByOrFail(Lot, { id: lotId });
-    const all = await manager.find(Inspection, {
-      select: { id: true, sampleIndex: true, supersedesId: true, conforming: true },
-      where: { lotId },
-    });
-    const defects = await manager.find(Defect, {
-      select: { inspectionId: true },
-      where: { lotId, severity: In(['critical', 'major']) },
-    });
+    const all = await manager.findBy(Inspection, { lotId });
+    const defects = await manager.findBy(Defect, { lotId });
     const indexOf = new Map(all.map((i) => [i.id, i.sampleIndex]));
-    const bad = new Set(
-      defects.map((d) => (d.inspectionId ? indexOf.get(d.inspectionId) : undefined)),
-    );
-    const current = currentInspections(all);
-    const nonconforming = current.filter((i) => !i.conforming || bad.has(i.sampleIndex)).length;
-    const { decision } = lotDecision(lot.plan, { inspected: current.length, nonconforming });
+    const defectsOf = new Map<number, Defect[]>();
+    for (const defect of defects) {
+      const index = defect.inspectionId ? indexOf.get(defect.inspectionId) : undefined;
+      if (index !== undefined) defectsOf.set(index, [...(defectsOf.get(index) ?? []), defect]);
+    }
+    const { prepared } = await this.specs.judged(manager, lot.specRevisionId);
+    const parts = currentInspections(all).map((inspection) => {
+      const found = defectsOf.get(inspection.sampleIndex);
+      if (!found) return inspection.serverVerdict as PartVerdict;
+      return partVerdict(prepared, { ...inspection.measurements, defects: found });
+    });
+    const verdict = lotVerdict(lot.plan, parts);
     const serverVerdict: LotVerdict =
-      decision === 'reject' ? 'flagged' : decision === 'accept' ? 'pass' : 'pending';
+      verdict.decision === 'reject'
+        ? 'flagged'
+        : verdict.decision === 'accept'
+          ? 'pass'
+          : 'pending';
     const newlyFlagged = serverVerdict === 'flagged' && !lot.flaggedAt;
-    const after: Lot = {
-      ...lot,
-      inspected: current.length,
-      nonconforming,
+    const patch = {
+      inspected: verdict.inspected,
+      nonconforming: verdict.nonconforming,
       serverVerdict,
+      verdictReason: verdict.reason.slice(0, 500),
       flaggedAt: newlyFlagged ? new Date() : lot.flaggedAt,
     };
-    await manager.update(
-      Lot,
-      { id: lotId },
-      {
-        inspected: after.inspected,
-        nonconforming,
-        serverVerdict,
-        flaggedAt: after.flaggedAt,
-      },
-    );
+    const after: Lot = { ...lot, ...patch };
+    await manager.update(Lot, { id: lotId }, patch);
     if (after.serverVerdict !== lot.serverVerdict) {
       await this.audit.record(manager, null, 'lot.verdict', 'lot', lotId, lot, after);
     }
@@ -222,6 +222,7 @@ export class LotsService {
         `Lot ${lot.lotNumber} of part ${part}, press ${press.code}, cavity ${lot.cavity}, is flagged.`,
         `${lot.nonconforming} of ${lot.inspected} sampled parts are nonconforming; the plan`,
         `(code letter ${lot.plan.codeLetter}, n = ${lot.plan.sampleSize}) rejects at ${lot.plan.reject}.`,
+        lot.verdictReason,
         '',
         `Review it in Gumshoe and record a disposition (lot id ${lot.id}).`,
       ].join('\n'),

@@ -4,7 +4,7 @@ import { CurrentUser } from '../auth/current-user.decorator.js';
 import { uuidParam } from '../common/id-param.js';
 import { SpecBody } from './dto/spec-body.dto.js';
 import { CreateSpecDto } from './dto/spec.dto.js';
-import type { PartSpec } from './entities/part-spec.entity.js';
+import type { Spec } from './entities/spec.entity.js';
 import type { SpecRevision } from './entities/spec-revision.entity.js';
 import { SpecsService, type SpecDetail } from './specs.service.js';
 
@@ -14,7 +14,7 @@ export class SpecsController {
 
   @Get()
   @AnyRole()
-  list(): Promise<PartSpec[]> {
+  list(): Promise<Spec[]> {
     return this.specs.list();
   }
 
@@ -26,7 +26,7 @@ export class SpecsController {
 
   @Post()
   @Roles('quality')
-  create(@CurrentUser() actor: AuthUser, @Body() body: CreateSpecDto): Promise<PartSpec> {
+  create(@CurrentUser() actor: AuthUser, @Body() body: CreateSpecDto): Promise<Spec> {
     return this.specs.create(actor.id, body);
   }
 

@@ -8,25 +8,33 @@ import { badInput } from '../common/validation.js';
 import { CompoundFit } from '../compounds/entities/compound-fit.entity.js';
 import { Compound } from '../compounds/entities/compound.entity.js';
 import { Transactions } from '../database/transactions.js';
-import { checkGeometry } from '../engine.js';
+import { prepareSpec, shapeFactor, type PreparedSpec } from '../engine.js';
 import type { SpecBody } from './dto/spec-body.dto.js';
 import type { CreateSpecDto } from './dto/spec.dto.js';
-import { PartSpec } from './entities/part-spec.entity.js';
+import { Spec } from './entities/spec.entity.js';
 import { SpecRevision } from './entities/spec-revision.entity.js';
-import { specWindows } from './spec-windows.js';
+import { engineSpec, specDerived } from './engine-spec.js';
 
-export type SpecDetail = PartSpec & { revisions: SpecRevision[] };
+export type SpecDetail = Spec & { revisions: SpecRevision[] };
+
+/** A released revision ready for verdicts: its spec row and the engine's prepared spec. */
+export interface JudgedRevision {
+  revision: SpecRevision;
+  prepared: PreparedSpec;
+}
 
 @Injectable()
 export class SpecsService {
+  private readonly released = new Map<string, JudgedRevision>();
+
   constructor(
     private readonly transactions: Transactions,
     private readonly audit: AuditService,
     private readonly feed: ChangeFeed,
-    @InjectRepository(PartSpec) private readonly specs: Repository<PartSpec>,
+    @InjectRepository(Spec) private readonly specs: Repository<Spec>,
   ) {}
 
-  list(): Promise<PartSpec[]> {
+  list(): Promise<Spec[]> {
     return this.specs.find({ relations: { currentRevision: true }, order: { partNumber: 'ASC' } });
   }
 
@@ -41,9 +49,9 @@ export class SpecsService {
     return { ...spec, revisions };
   }
 
-  create(actorId: string | null, dto: CreateSpecDto): Promise<PartSpec> {
+  create(actorId: string | null, dto: CreateSpecDto): Promise<Spec> {
     return this.transactions.run(async (manager) => {
-      const spec: PartSpec = {
+      const spec: Spec = {
         id: randomUUID(),
         partNumber: dto.partNumber,
         name: dto.name,
@@ -51,7 +59,7 @@ export class SpecsService {
         currentRevisionId: null,
         createdAt: new Date(),
       };
-      await manager.insert(PartSpec, spec);
+      await manager.insert(Spec, spec);
       await this.audit.record(manager, actorId, 'spec.create', 'spec', spec.id, null, spec);
       return spec;
     });
@@ -60,7 +68,7 @@ export class SpecsService {
   addRevision(actorId: string | null, specId: string, body: SpecBody): Promise<SpecRevision> {
     return this.transactions.run(async (manager) => {
       await this.check(manager, body);
-      if (!(await manager.existsBy(PartSpec, { id: specId }))) {
+      if (!(await manager.existsBy(Spec, { id: specId }))) {
         throw new NotFoundException(`No part spec ${specId}`);
       }
       const last = (await manager.maximum(SpecRevision, 'revision', { specId })) ?? 0;
@@ -72,6 +80,7 @@ export class SpecsService {
         body: plain(body),
         compoundId: body.compoundId,
         fitId: null,
+        partSpec: null,
         derived: null,
         createdAt: new Date(),
         releasedAt: null,
@@ -125,11 +134,13 @@ export class SpecsService {
         );
       }
       const fit = await manager.findOneByOrFail(CompoundFit, { id: compound.currentFitId });
+      const partSpec = engineSpec(before.body, fit.model, compound.bulkModulusMPa);
       const after: SpecRevision = {
         ...before,
         status: 'released',
         fitId: fit.id,
-        derived: specWindows(before.body, fit),
+        partSpec,
+        derived: specDerived(partSpec),
         releasedAt: new Date(),
         releasedBy: actorId,
       };
@@ -139,14 +150,15 @@ export class SpecsService {
         {
           status: after.status,
           fitId: after.fitId,
+          partSpec: after.partSpec,
           derived: after.derived,
           releasedAt: after.releasedAt,
           releasedBy: after.releasedBy,
         },
       );
-      await manager.update(PartSpec, { id: specId }, { currentRevisionId: revisionId });
+      await manager.update(Spec, { id: specId }, { currentRevisionId: revisionId });
       await this.audit.record(manager, actorId, 'spec.release', 'spec', specId, before, after);
-      const spec = await manager.findOneByOrFail(PartSpec, { id: specId });
+      const spec = await manager.findOneByOrFail(Spec, { id: specId });
       await this.feed.publish(manager, 'spec', revisionId, {
         ...after,
         fit,
@@ -155,6 +167,22 @@ export class SpecsService {
       });
       return after;
     });
+  }
+
+  /**
+   * The engine's prepared spec of a released revision. Released revisions never change, so each
+   * is prepared once per process: re-checking a pushed record then costs only its own verdict.
+   */
+  async judged(manager: EntityManager, revisionId: string): Promise<JudgedRevision> {
+    const known = this.released.get(revisionId);
+    if (known) return known;
+    const revision = await manager.findOneByOrFail(SpecRevision, { id: revisionId });
+    if (revision.status !== 'released' || !revision.partSpec) {
+      throw new ConflictException(`Revision ${revisionId} is not released`);
+    }
+    const judged = { revision, prepared: prepareSpec(revision.partSpec) };
+    this.released.set(revisionId, judged);
+    return judged;
   }
 
   private async draft(
@@ -172,7 +200,8 @@ export class SpecsService {
 
   /** What the DTO cannot see on one field: references and relations between fields. */
   private async check(manager: EntityManager, body: SpecBody): Promise<void> {
-    checkGeometry(body.geometry);
+    // The engine refuses a geometry it cannot judge parts by (e.g. a hole as wide as the ring).
+    shapeFactor(body.geometry);
     if (body.testDeflection >= body.geometry.thickness) {
       throw badInput([
         {

@@ -3,7 +3,8 @@ import { AnyRole, Roles, type AuthUser } from '../auth/access.js';
 import { CurrentUser } from '../auth/current-user.decorator.js';
 import { ChangeFeed, type ChangePage } from '../changes/change-feed.service.js';
 import { PullQueryDto } from './dto/pull.dto.js';
-import { PushDto } from './dto/push.dto.js';
+import type { PushRequest } from './dto/push.dto.js';
+import { PushPipe } from './push.pipe.js';
 import { SyncService, type OpResult } from './sync.service.js';
 
 @Controller('sync')
@@ -16,7 +17,10 @@ export class SyncController {
   @Post('push')
   @Roles('inspector', 'supervisor')
   @HttpCode(200)
-  push(@CurrentUser() user: AuthUser, @Body() body: PushDto): Promise<{ results: OpResult[] }> {
+  push(
+    @CurrentUser() user: AuthUser,
+    @Body(PushPipe) body: PushRequest,
+  ): Promise<{ results: OpResult[] }> {
     return this.sync.push(user, body);
   }
 

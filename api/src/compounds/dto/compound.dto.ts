@@ -34,6 +34,11 @@ export class CreateCompoundDto {
 
   @Finite(10, 95)
   hardnessShoreA: number;
+
+  /** Rubbers lie around 1000–3000 MPa. */
+  @IsOptional()
+  @Finite(100, 10_000)
+  bulkModulusMPa?: number;
 }
 
 export class StressPointDto {

@@ -1,4 +1,5 @@
 import { Column, Entity, Index, ManyToOne, PrimaryColumn, type Relation } from 'typeorm';
+import type { MaterialModel } from '../../engine.js';
 import { Compound } from './compound.entity.js';
 
 export type FitStatus = 'draft' | 'published';
@@ -21,7 +22,7 @@ export class CompoundFit {
 
   /** The engine's model shape with the fitted constants. */
   @Column({ type: 'simple-json' })
-  model: Record<string, unknown>;
+  model: MaterialModel;
 
   @Column({ type: 'varchar', length: 12 })
   objective: 'absolute' | 'relative';
@@ -31,7 +32,7 @@ export class CompoundFit {
 
   /** What the engine reported besides the model: RMS and R² per mode, iterations, stability. */
   @Column({ type: 'simple-json' })
-  result: Record<string, unknown>;
+  result: object;
 
   @Column({ type: 'varchar', length: 12 })
   status: FitStatus;

@@ -21,6 +21,10 @@ export class Compound {
   @Column({ type: 'double precision' })
   hardnessShoreA: number;
 
+  /** Bulk modulus K, MPa, where the lab measured it; the engine's default otherwise. */
+  @Column({ type: 'double precision', nullable: true })
+  bulkModulusMPa: number | null;
+
   /** The published fit whose constants part specs pick up when they are released. */
   @Column({ type: 'varchar', length: 36, nullable: true })
   currentFitId: string | null;

@@ -52,4 +52,9 @@ export class Measurements {
   @IsOptional()
   @Finite(0, 10_000_000)
   load?: number;
+
+  /** From a compression-set test piece of the lot (ASTM D395 B / ISO 815-1), percent. */
+  @IsOptional()
+  @Finite(0, 100)
+  compressionSetPercent?: number;
 }

@@ -1,6 +1,8 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
 import { Lot } from '../../lots/entities/lot.entity.js';
 import { User } from '../../users/entities/user.entity.js';
+import type { PartVerdict } from '../../engine.js';
+import type { DeviceVerdictDto } from '../../sync/dto/operations.dto.js';
 import type { Measurements } from '../dto/measurements.dto.js';
 
 /**
@@ -35,11 +37,11 @@ export class Inspection {
 
   /** What the tablet showed, kept as sent. */
   @Column({ type: 'simple-json' })
-  deviceVerdict: Record<string, unknown>;
+  deviceVerdict: DeviceVerdictDto;
 
-  /** The engine's verdict worked out on the server: the one of record. */
+  /** The engine's verdict of these measurements, worked out on the server: the one of record. */
   @Column({ type: 'simple-json' })
-  serverVerdict: Record<string, unknown>;
+  serverVerdict: PartVerdict;
 
   @Column({ type: 'boolean' })
   conforming: boolean;

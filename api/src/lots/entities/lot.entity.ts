@@ -1,6 +1,6 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
 import type { SamplingPlan } from '../../engine.js';
-import { PartSpec } from '../../specs/entities/part-spec.entity.js';
+import { Spec } from '../../specs/entities/spec.entity.js';
 import { Press } from '../../presses/entities/press.entity.js';
 import { SpecRevision } from '../../specs/entities/spec-revision.entity.js';
 import { User } from '../../users/entities/user.entity.js';
@@ -21,8 +21,8 @@ export class Lot {
   @Column({ type: 'varchar', length: 36 })
   specId: string;
 
-  @ManyToOne(() => PartSpec)
-  spec?: PartSpec;
+  @ManyToOne(() => Spec)
+  spec?: Spec;
 
   @Column({ type: 'varchar', length: 36 })
   specRevisionId: string;
@@ -73,6 +73,10 @@ export class Lot {
 
   @Column({ type: 'varchar', length: 12 })
   serverVerdict: LotVerdict;
+
+  /** The engine's lot verdict in words, e.g. "2 of 13 inspected parts nonconforming …". */
+  @Column({ type: 'varchar', length: 500 })
+  verdictReason: string;
 
   @Column({ type: 'simple-json', nullable: true })
   deviceVerdict: { verdict: 'pass' | 'flagged'; nonconforming: number } | null;

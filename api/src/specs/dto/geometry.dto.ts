@@ -1,4 +1,4 @@
-import { Equals, IsIn } from 'class-validator';
+import { Equals, IsIn, IsOptional } from 'class-validator';
 import { Finite } from '../../common/numbers.js';
 
 export const SHAPES = ['disc', 'annulus', 'square', 'rectangle', 'strip'] as const;
@@ -69,6 +69,11 @@ export class StripDto {
 
   @Finite(...PLAN)
   width: number;
+
+  /** A strip is long enough to ignore its ends; a length makes loads total rather than per mm. */
+  @IsOptional()
+  @Finite(...PLAN)
+  length?: number;
 
   @Finite(...THICKNESS)
   thickness: number;

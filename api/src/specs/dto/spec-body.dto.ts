@@ -8,9 +8,75 @@ export const TOLERANCE_CLASSES = ['M1', 'M2', 'M3', 'M4'] as const;
 export const LEVELS = ['I', 'II', 'III'] as const;
 export const SEVERITIES = ['normal', 'tightened', 'reduced'] as const;
 
-export class ToleranceDto {
+type ToleranceClass = (typeof TOLERANCE_CLASSES)[number];
+
+export class DimensionClassDto {
   @IsIn(TOLERANCE_CLASSES)
-  class: (typeof TOLERANCE_CLASSES)[number];
+  class: ToleranceClass;
+
+  /** ISO 3302-1: 'closure' dimensions cross the parting line and carry flash. */
+  @IsIn(['fixed', 'closure'])
+  kind: 'fixed' | 'closure';
+}
+
+/** Per-dimension classes where the drawing differs from the spec's general class. */
+export class DimensionClassesDto {
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => DimensionClassDto)
+  thickness?: DimensionClassDto;
+
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => DimensionClassDto)
+  diameter?: DimensionClassDto;
+
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => DimensionClassDto)
+  outerDiameter?: DimensionClassDto;
+
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => DimensionClassDto)
+  innerDiameter?: DimensionClassDto;
+
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => DimensionClassDto)
+  side?: DimensionClassDto;
+
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => DimensionClassDto)
+  length?: DimensionClassDto;
+
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => DimensionClassDto)
+  width?: DimensionClassDto;
+}
+
+export class ToleranceDto {
+  /** The general class; a dimension not listed in `dimensions` takes it as a fixed dimension. */
+  @IsIn(TOLERANCE_CLASSES)
+  class: ToleranceClass;
+
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => DimensionClassesDto)
+  dimensions?: DimensionClassesDto;
+}
+
+export class MechanicsDto {
+  @IsOptional()
+  @IsIn(['none', 'gent-lindley', 'lubrication'])
+  bulkCorrection?: 'none' | 'gent-lindley' | 'lubrication';
+
+  /** Lindley's material factor k; read from the hardness defaults when absent. */
+  @IsOptional()
+  @Finite(0, 2)
+  materialFactor?: number;
 }
 
 export class HardnessSpecDto {
@@ -43,6 +109,11 @@ export class SpecBody {
   @IsBoolean()
   bonded: boolean;
 
+  /** Unbonded parts: 'friction' gives lubricated and bonded loads as bounds. */
+  @IsOptional()
+  @IsIn(['friction', 'lubricated'])
+  unbondedFaces?: 'friction' | 'lubricated';
+
   @IsUUID()
   compoundId: string;
 
@@ -69,4 +140,9 @@ export class SpecBody {
   @ValidateNested()
   @Type(() => SamplingDto)
   sampling: SamplingDto;
+
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => MechanicsDto)
+  mechanics?: MechanicsDto;
 }

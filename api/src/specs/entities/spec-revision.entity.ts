@@ -9,8 +9,10 @@ import {
 } from 'typeorm';
 import { Compound } from '../../compounds/entities/compound.entity.js';
 import { CompoundFit } from '../../compounds/entities/compound-fit.entity.js';
+import type { PartSpec } from '../../engine.js';
 import type { SpecBody } from '../dto/spec-body.dto.js';
-import { PartSpec } from './part-spec.entity.js';
+import type { SpecDerived } from '../engine-spec.js';
+import { Spec } from './spec.entity.js';
 
 export type RevisionStatus = 'draft' | 'released';
 
@@ -27,8 +29,8 @@ export class SpecRevision {
   @Column({ type: 'varchar', length: 36 })
   specId: string;
 
-  @ManyToOne(() => PartSpec)
-  spec?: Relation<PartSpec>;
+  @ManyToOne(() => Spec)
+  spec?: Relation<Spec>;
 
   @Column({ type: 'integer' })
   revision: number;
@@ -52,9 +54,13 @@ export class SpecRevision {
   @JoinColumn({ name: 'fitId' })
   fit?: Relation<CompoundFit> | null;
 
+  /** Frozen at release: the spec with the fit's constants, as the engine judges parts by it. */
+  @Column({ type: 'simple-json', nullable: true })
+  partSpec: PartSpec | null;
+
   /** The engine's expected load and acceptance windows, worked out once at release. */
   @Column({ type: 'simple-json', nullable: true })
-  derived: Record<string, unknown> | null;
+  derived: SpecDerived | null;
 
   @Column({ type: Date })
   createdAt: Date;

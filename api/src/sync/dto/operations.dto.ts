@@ -1,14 +1,16 @@
 import { Type } from 'class-transformer';
 import {
+  IsBoolean,
   IsIn,
   IsISO8601,
-  IsObject,
   IsOptional,
   IsString,
   IsUUID,
   Length,
   Matches,
   ValidateNested,
+  registerDecorator,
+  type ValidationOptions,
 } from 'class-validator';
 import { Finite, WholeNumber } from '../../common/numbers.js';
 import {
@@ -45,6 +47,49 @@ export class LotOpenPayload {
   moldedAt: string;
 }
 
+const STATUSES = ['within', 'near', 'out'] as const;
+
+/** `{ load: 'within', thickness: 'near', … }`: one status per characteristic, up to 20. */
+function IsStatuses(options?: ValidationOptions) {
+  return (target: object, propertyName: string) =>
+    registerDecorator({
+      name: 'isStatuses',
+      target: target.constructor,
+      propertyName,
+      options: {
+        message: `${propertyName} must map up to 20 characteristic names to within, near or out`,
+        ...options,
+      },
+      validator: {
+        validate: (value: unknown) =>
+          typeof value === 'object' &&
+          value !== null &&
+          !Array.isArray(value) &&
+          Object.keys(value).length <= 20 &&
+          Object.entries(value).every(
+            ([name, status]) => /^[a-z][a-zA-Z-]{0,39}$/.test(name) && STATUSES.includes(status),
+          ),
+      },
+    });
+}
+
+/**
+ * What the tablet showed for the part: the overall and per-characteristic status of the
+ * engine's PartVerdict (its words and numbers follow from the measurements, so they stay home).
+ */
+export class DeviceVerdictDto {
+  @IsIn(STATUSES)
+  status: (typeof STATUSES)[number];
+
+  @IsBoolean()
+  conforming: boolean;
+
+  // A map rather than a list of objects: validating nested objects is what a push spends on.
+  @IsOptional()
+  @IsStatuses()
+  characteristics?: Record<string, (typeof STATUSES)[number]>;
+}
+
 export class InspectionRecordPayload {
   @IsUUID()
   id: string;
@@ -63,9 +108,9 @@ export class InspectionRecordPayload {
   @Type(() => Measurements)
   measurements: Measurements;
 
-  /** Kept as the tablet sent it (its shape follows the engine's verdict type). */
-  @IsObject()
-  deviceVerdict: Record<string, unknown>;
+  @ValidateNested()
+  @Type(() => DeviceVerdictDto)
+  deviceVerdict: DeviceVerdictDto;
 }
 
 export class DefectRecordPayload {

@@ -1,23 +1,37 @@
-import { Type } from 'class-transformer';
+import { Type, type TypeHelpOptions } from 'class-transformer';
 import {
   ArrayMaxSize,
   IsArray,
+  IsIn,
   IsISO8601,
   IsObject,
-  IsString,
   IsUUID,
-  Length,
   ValidateNested,
 } from 'class-validator';
+import {
+  DefectRecordPayload,
+  InspectionRecordPayload,
+  LotOpenPayload,
+  LotSubmitPayload,
+} from './operations.dto.js';
+
+export const PAYLOADS = {
+  'lot.open': LotOpenPayload,
+  'inspection.record': InspectionRecordPayload,
+  'defect.record': DefectRecordPayload,
+  'lot.submit': LotSubmitPayload,
+};
+export type OperationType = keyof typeof PAYLOADS;
+
+/** Stands in for the payload of an unknown type, which is then reported by its `type`. */
+class UnknownPayload {}
 
 export class OperationDto {
   @IsUUID()
   opId: string;
 
-  /** Checked per operation, so an op of a type this server does not know is rejected alone. */
-  @IsString()
-  @Length(1, 24)
-  type: string;
+  @IsIn(Object.keys(PAYLOADS))
+  type: OperationType;
 
   @IsUUID()
   authorId: string;
@@ -25,9 +39,24 @@ export class OperationDto {
   @IsISO8601({ strict: true })
   recordedAt: string;
 
-  /** Validated per operation type (sync/README.md); a bad payload rejects that op only. */
+  // Each payload takes the class of its operation's type (sync/README.md).
   @IsObject()
-  payload: Record<string, unknown>;
+  @ValidateNested()
+  @Type((help?: TypeHelpOptions) => {
+    const type = (help?.object as { type?: unknown } | undefined)?.type;
+    return Object.hasOwn(PAYLOADS, String(type)) ? PAYLOADS[type as OperationType] : UnknownPayload;
+  })
+  payload: object;
+}
+
+/**
+ * What the push route receives once PushPipe has validated it: `problems[i]` says why operation
+ * i cannot be applied, if it cannot; the rest of the batch goes on.
+ */
+export interface PushRequest {
+  deviceId: string;
+  operations: OperationDto[];
+  problems: (string | undefined)[];
 }
 
 export class PushDto {

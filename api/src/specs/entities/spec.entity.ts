@@ -2,7 +2,7 @@ import { Column, Entity, JoinColumn, ManyToOne, PrimaryColumn, type Relation } f
 import { SpecRevision } from './spec-revision.entity.js';
 
 @Entity('part_specs')
-export class PartSpec {
+export class Spec {
   @PrimaryColumn({ type: 'varchar', length: 36 })
   id: string;
 

@@ -1,0 +1,66 @@
+import { randomUUID } from 'node:crypto';
+import { Injectable } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { In, Repository } from 'typeorm';
+import { AuditService } from '../audit/audit.service.js';
+import { badInput } from '../common/validation.js';
+import { Transactions } from '../database/transactions.js';
+import { fitModel, type MaterialModel } from '../engine.js';
+import type { CreateFitDto } from './dto/compound.dto.js';
+import { CompoundFit } from './entities/compound-fit.entity.js';
+import { TestSet } from './entities/test-set.entity.js';
+
+@Injectable()
+export class FitsService {
+  constructor(
+    private readonly transactions: Transactions,
+    private readonly audit: AuditService,
+    @InjectRepository(TestSet) private readonly testSets: Repository<TestSet>,
+  ) {}
+
+  /**
+   * Fits the model to the chosen test sets with the engine and keeps the result as the next
+   * draft version. The fit runs before the writers' queue is taken: it is the slow part.
+   */
+  async fit(actorId: string, compoundId: string, dto: CreateFitDto): Promise<CompoundFit> {
+    const sets = await this.testSets.findBy({ id: In(dto.testSetIds), compoundId });
+    const missing = dto.testSetIds.filter((id) => !sets.some((s) => s.id === id));
+    if (missing.length > 0) {
+      throw badInput([
+        {
+          field: 'testSetIds',
+          messages: [`not test sets of this compound: ${missing.join(', ')}`],
+        },
+      ]);
+    }
+    const data = sets.flatMap((set) => set.points.map((point) => ({ mode: set.mode, ...point })));
+    const { model, ...result } = fitModel({
+      model: dto.model as MaterialModel,
+      data,
+      objective: dto.objective,
+    });
+    return this.transactions.run(async (manager) => {
+      const last = (await manager.maximum(CompoundFit, 'version', { compoundId })) ?? 0;
+      const fit: CompoundFit = {
+        id: randomUUID(),
+        compoundId,
+        version: last + 1,
+        model,
+        objective: dto.objective,
+        testSetIds: dto.testSetIds,
+        result,
+        status: 'draft',
+        createdBy: actorId,
+        createdAt: new Date(),
+        publishedAt: null,
+      };
+      await manager.insert(CompoundFit, fit);
+      await this.audit.record(manager, actorId, 'compound.fit', 'compound', compoundId, null, {
+        fitId: fit.id,
+        version: fit.version,
+        model,
+      });
+      return fit;
+    });
+  }
+}
