@@ -58,7 +58,7 @@ export function CompoundForm({ initial = {}, codeFixed, submitLabel, onSubmit, o
         polymer: fields.polymer,
         hardnessShoreA: Number(fields.hardness),
         ...(fields.bulk.trim() ? { bulkModulusMPa: Number(fields.bulk) } : {}),
-        notes: fields.notes.trim(),
+        ...(fields.notes.trim() ? { notes: fields.notes.trim() } : {}),
       });
     } catch (failure) {
       setError(failure instanceof Error ? failure.message : String(failure));
