@@ -12,6 +12,7 @@ import { LotsModule } from './lots/lots.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { PhotosModule } from './photos/photos.module.js';
 import { PressesModule } from './presses/presses.module.js';
+import { ReportsModule } from './reports/reports.module.js';
 import { SpecsModule } from './specs/specs.module.js';
 import { SyncModule } from './sync/sync.module.js';
 import { UsersModule } from './users/users.module.js';
@@ -35,6 +36,7 @@ export class AppModule {
         LotsModule,
         InspectionsModule,
         SyncModule,
+        ReportsModule,
         PhotosModule,
         HealthModule,
         SeedModule,

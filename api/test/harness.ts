@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import request from 'supertest';
+import { DataSource } from 'typeorm';
 import { loadConfig, type Config } from '../src/config.js';
 import { createApp } from '../src/create-app.js';
 import { DEMO_PASSWORD } from '../src/database/seed.js';
@@ -32,6 +33,14 @@ export async function startApp(env: Record<string, string> = {}): Promise<Harnes
       rmSync(dataDir, { recursive: true, force: true });
     },
   };
+}
+
+/** Rows in a table, read straight from the server's database. */
+export async function rows(h: Harness, table: string): Promise<number> {
+  const [row] = (await h.app.get(DataSource).query(`SELECT COUNT(*) AS n FROM ${table}`)) as {
+    n: number;
+  }[];
+  return row!.n;
 }
 
 export async function signIn(

@@ -27,6 +27,12 @@ import type { DispositionDto, LotQueryDto } from './dto/lot.dto.js';
 import { Disposition } from './entities/disposition.entity.js';
 import { Lot, type LotVerdict } from './entities/lot.entity.js';
 
+export interface JudgedPart {
+  inspection: Inspection;
+  defects: Defect[];
+  verdict: PartVerdict;
+}
+
 export type InspectionView = Inspection & { supersededBy: string | null };
 export type LotDetail = Lot & {
   inspections: InspectionView[];
@@ -166,21 +172,11 @@ export class LotsService {
    */
   async recount(manager: EntityManager, lotId: string): Promise<void> {
     const lot = await manager.findOneByOrFail(Lot, { id: lotId });
-    const all = await manager.findBy(Inspection, { lotId });
-    const defects = await manager.findBy(Defect, { lotId });
-    const indexOf = new Map(all.map((i) => [i.id, i.sampleIndex]));
-    const defectsOf = new Map<number, Defect[]>();
-    for (const defect of defects) {
-      const index = defect.inspectionId ? indexOf.get(defect.inspectionId) : undefined;
-      if (index !== undefined) defectsOf.set(index, [...(defectsOf.get(index) ?? []), defect]);
-    }
-    const { prepared } = await this.specs.judged(manager, lot.specRevisionId);
-    const parts = currentInspections(all).map((inspection) => {
-      const found = defectsOf.get(inspection.sampleIndex);
-      if (!found) return inspection.serverVerdict as PartVerdict;
-      return partVerdict(prepared, { ...inspection.measurements, defects: found });
-    });
-    const verdict = lotVerdict(lot.plan, parts);
+    const parts = await this.judgeParts(manager, lot);
+    const verdict = lotVerdict(
+      lot.plan,
+      parts.map((p) => p.verdict),
+    );
     const serverVerdict: LotVerdict =
       verdict.decision === 'reject'
         ? 'flagged'
@@ -202,6 +198,36 @@ export class LotsService {
     }
     await this.feed.publish(manager, 'lot', lotId, after);
     if (newlyFlagged) await this.notifyFlagged(manager, after);
+  }
+
+  /**
+   * The lot's current sampled parts, each with the server's verdict of it: the stored one, or —
+   * where defects were recorded on that sample under any revision of its record — the engine's
+   * verdict of its measurements together with those defects.
+   */
+  async judgeParts(manager: EntityManager, lot: Lot): Promise<JudgedPart[]> {
+    const all = await manager.find(Inspection, {
+      where: { lotId: lot.id },
+      order: { sampleIndex: 'ASC' },
+    });
+    const defects = await manager.find(Defect, {
+      where: { lotId: lot.id },
+      order: { recordedAt: 'ASC' },
+    });
+    const indexOf = new Map(all.map((i) => [i.id, i.sampleIndex]));
+    const defectsOf = new Map<number, Defect[]>();
+    for (const defect of defects) {
+      const index = defect.inspectionId ? indexOf.get(defect.inspectionId) : undefined;
+      if (index !== undefined) defectsOf.set(index, [...(defectsOf.get(index) ?? []), defect]);
+    }
+    const { prepared } = await this.specs.judged(manager, lot.specRevisionId);
+    return currentInspections(all).map((inspection) => {
+      const found = defectsOf.get(inspection.sampleIndex) ?? [];
+      const verdict = found.length
+        ? partVerdict(prepared, { ...inspection.measurements, defects: found })
+        : inspection.serverVerdict;
+      return { inspection, defects: found, verdict };
+    });
   }
 
   private async notifyFlagged(manager: EntityManager, lot: Lot): Promise<void> {
