@@ -85,6 +85,7 @@ describe('quality desk', () => {
     await onScreen(page).getByRole('table', { name: 'File preview' }).waitFor();
     const check = onScreen(page).getByRole('region', { name: 'Import check' });
     await expect(check.textContent()).resolves.toContain('uniaxial 25, equibiaxial 17, planar 14');
+    await check.scrollIntoViewIfNeeded();
     await screenshot(page, 'desk-csv-import');
     await onScreen(page).getByRole('button', { name: 'Keep 56 points as test data' }).click();
     const sets = onScreen(page).getByRole('table', { name: 'Test data' });
@@ -102,8 +103,13 @@ describe('quality desk', () => {
     await results.waitFor();
     const row = results.locator('tbody tr').first();
     await expect(row.textContent()).resolves.toMatch(/C10 = 0\.\d+ MPa, C20 = /);
-    await onScreen(page).getByRole('table', { name: 'Stability' }).waitFor();
+    const stability = onScreen(page).getByRole('table', { name: 'Stability' });
+    await stability.waitFor();
     await screenshot(page, 'desk-fit');
+    await results.scrollIntoViewIfNeeded();
+    await screenshot(page, 'desk-fit-table');
+    await stability.scrollIntoViewIfNeeded();
+    await screenshot(page, 'desk-fit-stability');
 
     await onScreen(page).getByRole('button', { name: 'Publish…' }).click();
     await page
@@ -155,7 +161,12 @@ describe('quality desk', () => {
     await expect.poll(() => load.textContent()).not.toBe('');
     expectedLoad = newtons((await load.textContent()) ?? '');
     expect(expectedLoad).toBeGreaterThan(0);
+    await onScreen(page).getByRole('group', { name: 'Shape', exact: true }).scrollIntoViewIfNeeded();
     await screenshot(page, 'desk-spec-editor');
+    await onScreen(page)
+      .getByRole('table', { name: 'Acceptance windows' })
+      .scrollIntoViewIfNeeded();
+    await screenshot(page, 'desk-spec-windows');
     await onScreen(page).getByRole('button', { name: 'Release…' }).click();
     await onScreen(page).getByRole('button', { name: 'Release it' }).click();
     const revisions = onScreen(page).getByRole('table', { name: 'Revisions' });
@@ -163,6 +174,7 @@ describe('quality desk', () => {
     await expect(revisions.locator('tbody tr').first().textContent()).resolves.toMatch(
       /rev 2\s*released/,
     );
+    await revisions.scrollIntoViewIfNeeded();
     await screenshot(page, 'desk-spec-revisions');
   });
 

@@ -79,16 +79,18 @@ export function FitSetup({ testSets, choices, busy, onFit }: Props) {
         </fieldset>
         <fieldset className="desk-bare">
           <legend className="desk-label">Models</legend>
-          {choices.map((choice) => (
-            <label key={choice.key} className="desk-check">
-              <input
-                type="checkbox"
-                checked={picked.has(choice.key)}
-                onChange={() => setPicked(toggle(picked, choice.key))}
-              />
-              {choice.label}
-            </label>
-          ))}
+          <div className="desk-checks">
+            {choices.map((choice) => (
+              <label key={choice.key} className="desk-check">
+                <input
+                  type="checkbox"
+                  checked={picked.has(choice.key)}
+                  onChange={() => setPicked(toggle(picked, choice.key))}
+                />
+                {choice.label}
+              </label>
+            ))}
+          </div>
         </fieldset>
       </div>
       <div className="desk-grid desk-grid--4">
