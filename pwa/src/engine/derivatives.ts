@@ -27,17 +27,36 @@ export function gradient(f: (xs: Complex[]) => Complex, xs: readonly number[]): 
   return xs.map((_, j) => f(xs.map((x, i) => new Complex(x, i === j ? STEP : 0))).im / STEP);
 }
 
-/** ∂²f/∂xⱼ∂xₖ: xⱼ stepped on i₁ and xₖ on i₂, one bicomplex evaluation per pair j ≤ k. */
-export function hessian(f: (xs: Bicomplex[]) => Bicomplex, xs: readonly number[]): number[][] {
+export interface SecondOrder {
+  readonly gradient: number[];
+  readonly hessian: number[][];
+}
+
+/**
+ * ∂f/∂xⱼ and ∂²f/∂xⱼ∂xₖ: xⱼ stepped on i₁ and xₖ on i₂, one bicomplex evaluation per pair
+ * j ≤ k; the i₁ parts of the diagonal evaluations carry the gradient.
+ */
+export function gradientAndHessian(
+  f: (xs: Bicomplex[]) => Bicomplex,
+  xs: readonly number[],
+): SecondOrder {
   xs.forEach((x, j) => requireFinite(`xs[${j}]`, x));
+  const g = xs.map(() => 0);
   const h = xs.map(() => xs.map(() => 0));
   xs.forEach((_, j) => {
     for (let k = j; k < xs.length; k++) {
       const point = xs.map((x, i) => new Bicomplex(x, i === j ? STEP : 0, i === k ? STEP : 0, 0));
-      const value = f(point).i12 / STEP_SQUARED;
+      const result = f(point);
+      const value = result.i12 / STEP_SQUARED;
       h[j]![k] = value;
       h[k]![j] = value;
+      if (k === j) g[j] = result.i1 / STEP;
     }
   });
-  return h;
+  return { gradient: g, hessian: h };
+}
+
+/** ∂²f/∂xⱼ∂xₖ. */
+export function hessian(f: (xs: Bicomplex[]) => Bicomplex, xs: readonly number[]): number[][] {
+  return gradientAndHessian(f, xs).hessian;
 }

@@ -12,6 +12,9 @@ export const jets = {
     return [e, e, e];
   },
   log(a: number): Jet {
+    // Outside the domain every part is undefined, not just the value: a complex step of
+    // ln|a| would otherwise pass for a derivative.
+    if (a < 0) return [Number.NaN, Number.NaN, Number.NaN];
     return [Math.log(a), 1 / a, -1 / (a * a)];
   },
   sqrt(a: number): Jet {

@@ -14,35 +14,40 @@ export interface Factorization {
 export function qrFactor(a: readonly (readonly number[])[], b: readonly number[]): Factorization {
   const m = a.length;
   const n = a[0]?.length ?? 0;
-  const columns = Array.from({ length: n }, (_, j) => a.map((row) => row[j]!));
-  const rhs = [...b];
+  // Column-major copy with b as column n, reflected along with the others.
+  const w = new Float64Array(m * (n + 1));
+  for (let i = 0; i < m; i++) {
+    const row = a[i]!;
+    for (let j = 0; j < n; j++) w[j * m + i] = row[j]!;
+    w[n * m + i] = b[i]!;
+  }
   for (let k = 0; k < n; k++) {
-    const v = columns[k]!;
+    const v = k * m;
     let sumOfSquares = 0;
-    for (let i = k; i < m; i++) sumOfSquares += v[i]! * v[i]!;
+    for (let i = k; i < m; i++) sumOfSquares += w[v + i]! * w[v + i]!;
     if (sumOfSquares === 0) continue;
     const norm = Math.sqrt(sumOfSquares);
-    const head = v[k]!;
+    const head = w[v + k]!;
     // Reflect onto −sign(head)·‖x‖·e_k so the first component does not cancel.
     const alpha = head > 0 ? -norm : norm;
-    v[k] = head - alpha;
+    w[v + k] = head - alpha;
     const vv = 2 * norm * (norm + Math.abs(head));
-    const reflect = (x: number[]) => {
+    for (let j = k + 1; j <= n; j++) {
+      const c = j * m;
       let dot = 0;
-      for (let i = k; i < m; i++) dot += v[i]! * x[i]!;
+      for (let i = k; i < m; i++) dot += w[v + i]! * w[c + i]!;
       const scale = (2 * dot) / vv;
-      for (let i = k; i < m; i++) x[i] = x[i]! - scale * v[i]!;
-    };
-    for (let j = k + 1; j < n; j++) reflect(columns[j]!);
-    reflect(rhs);
-    v[k] = alpha;
+      for (let i = k; i < m; i++) w[c + i] = w[c + i]! - scale * w[v + i]!;
+    }
+    w[v + k] = alpha;
   }
-  return {
-    r: Array.from({ length: n }, (_, i) =>
-      Array.from({ length: n }, (_, j) => (j >= i ? columns[j]![i]! : 0)),
-    ),
-    qtb: rhs.slice(0, n),
-  };
+  const r: number[][] = [];
+  for (let i = 0; i < n; i++) {
+    const row = new Array<number>(n).fill(0);
+    for (let j = i; j < n; j++) row[j] = w[j * m + i]!;
+    r.push(row);
+  }
+  return { r, qtb: Array.from(w.subarray(n * m, n * m + n)) };
 }
 
 /** x with Rx = y, R upper triangular and nonsingular. */

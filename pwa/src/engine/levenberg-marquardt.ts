@@ -50,7 +50,9 @@ const DWARF = Number.MIN_VALUE * 2 ** 52;
 const FACTOR = 100;
 
 function scaledNorm(diag: readonly number[], x: readonly number[]): number {
-  return euclideanNorm(x.map((v, j) => diag[j]! * v));
+  let sum = 0;
+  for (let j = 0; j < x.length; j++) sum += (diag[j]! * x[j]!) ** 2;
+  return Math.sqrt(sum);
 }
 
 /** p minimising ‖Rp + qtb‖² + par·‖Dp‖², with the R factor of that damped system. */
@@ -61,11 +63,15 @@ function dampedStep(
 ): { step: number[]; r: number[][] } {
   const n = diag.length;
   const root = Math.sqrt(par);
-  const stacked = [
-    ...r,
-    ...diag.map((d, j) => Array.from({ length: n }, (_, k) => (k === j ? root * d : 0))),
-  ];
-  const damped = qrFactor(stacked, [...qtb.map((v) => -v), ...diag.map(() => 0)]);
+  const stacked = [...r];
+  const rhs = new Array<number>(2 * n).fill(0);
+  for (let j = 0; j < n; j++) {
+    const row = new Array<number>(n).fill(0);
+    row[j] = root * diag[j]!;
+    stacked.push(row);
+    rhs[j] = -qtb[j]!;
+  }
+  const damped = qrFactor(stacked, rhs);
   return { step: solveUpper(damped.r, damped.qtb), r: damped.r };
 }
 
@@ -142,18 +148,20 @@ function lmpar(
 }
 
 function columnNorms(jacobian: readonly (readonly number[])[], n: number): number[] {
-  return Array.from({ length: n }, (_, j) => euclideanNorm(jacobian.map((row) => row[j]!)));
+  const sums = new Array<number>(n).fill(0);
+  for (const row of jacobian) for (let j = 0; j < n; j++) sums[j]! += row[j]! * row[j]!;
+  return sums.map(Math.sqrt);
 }
 
 /** ‖Rp‖ for upper-triangular R. */
 function triangularProductNorm(r: readonly (readonly number[])[], p: readonly number[]): number {
-  return euclideanNorm(
-    r.map((row, i) => {
-      let sum = 0;
-      for (let j = i; j < p.length; j++) sum += row[j]! * p[j]!;
-      return sum;
-    }),
-  );
+  let sum = 0;
+  for (let i = 0; i < p.length; i++) {
+    let dot = 0;
+    for (let j = i; j < p.length; j++) dot += r[i]![j]! * p[j]!;
+    sum += dot * dot;
+  }
+  return Math.sqrt(sum);
 }
 
 export function levenbergMarquardt(

@@ -1,10 +1,10 @@
-import { derivative, hessian } from './derivatives.js';
+import { gradientAndHessian, type SecondOrder } from './derivatives.js';
 import { EngineInputError } from './errors.js';
 import { MODES, type MaterialModel, type Mode } from './material-model.js';
 import { Real } from './real.js';
 import type { Scalar } from './scalar.js';
 import { strainEnergy } from './strain-energy.js';
-import { modeStretches, uncheckedStress } from './stress.js';
+import { modeStretches } from './stress.js';
 
 /*
  * Drucker stability (Drucker, J. Appl. Mech. 26, 1959 [M]; REFERENCES §4 [D for this form]):
@@ -13,13 +13,25 @@ import { modeStretches, uncheckedStress } from './stress.js';
  * compression (1 down to 0.1), together with the stronger monotonicity dP/dλ > 0.
  */
 
-/** Hessian of Ŵ(ε₁, ε₂) at the state of `mode` at `stretch`, by bicomplex step. */
-export function druckerHessian(model: MaterialModel, mode: Mode, stretch: number): number[][] {
+/** Gradient and Hessian of Ŵ(ε₁, ε₂) at the state of `mode` at `stretch`, by bicomplex step. */
+function druckerDerivatives(model: MaterialModel, mode: Mode, stretch: number): SecondOrder {
   const [l1, l2] = modeStretches(mode, new Real(stretch));
   const energy = <T extends Scalar<T>>([e1, e2]: T[]): T =>
     strainEnergy(model, [e1!.exp(), e2!.exp(), e1!.add(e2!).neg().exp()]);
-  return hessian(energy, [Math.log(l1.re), Math.log(l2.re)]);
+  return gradientAndHessian(energy, [Math.log(l1.re), Math.log(l2.re)]);
 }
+
+/** Hessian of Ŵ(ε₁, ε₂) at the state of `mode` at `stretch`. */
+export function druckerHessian(model: MaterialModel, mode: Mode, stretch: number): number[][] {
+  return druckerDerivatives(model, mode, stretch).hessian;
+}
+
+/** Each test moves along ε = ln λ·(1, c) (REFERENCES §2 stretches). */
+const PATH_DIRECTION: Readonly<Record<Mode, number>> = {
+  uniaxial: -0.5,
+  equibiaxial: 1,
+  planar: 0,
+};
 
 export interface PathStability {
   /** First stretch, going out from λ = 1, where Drucker's condition fails; null if none. */
@@ -35,18 +47,22 @@ export type Stability = Readonly<
 >;
 
 /** Points over the decade of stretch on each side; a sign change is then refined by bisection. */
-const SCAN_POINTS = 64;
+const SCAN_POINTS = 40;
 const BISECTIONS = 40;
 
-/** Smallest eigenvalue of Ŵ's Hessian and dP/dλ, or null where the model is undefined. */
+/**
+ * Smallest eigenvalue of Ŵ's Hessian, and a quantity with the sign of dP/dλ, or null where the
+ * model is undefined. Along ε = ln λ·v, d²W̃/dλ² = (vᵀHv − ∇Ŵ·v)/λ², and P is a positive
+ * multiple of dW̃/dλ, so the same evaluations give both checks.
+ */
 function indicators(model: MaterialModel, mode: Mode, stretch: number): [number, number] | null {
   try {
-    const [[a, b], [, d]] = druckerHessian(model, mode, stretch) as [
-      [number, number],
-      [number, number],
-    ];
+    const { gradient, hessian } = druckerDerivatives(model, mode, stretch);
+    const [[a, b], [, d]] = hessian as [[number, number], [number, number]];
+    const [g1, g2] = gradient as [number, number];
+    const c = PATH_DIRECTION[mode];
     const eigen = 0.5 * (a + d) - Math.hypot(0.5 * (a - d), b);
-    const slope = derivative((l) => uncheckedStress(model, mode, l), stretch);
+    const slope = a + 2 * b * c + d * c * c - (g1 + g2 * c);
     return Number.isFinite(eigen) && Number.isFinite(slope) ? [eigen, slope] : null;
   } catch (error) {
     if (error instanceof EngineInputError) return null;

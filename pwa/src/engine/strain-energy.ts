@@ -16,11 +16,13 @@ function ogden<T extends Scalar<T>>(
   terms: readonly OgdenTerm<T | number>[],
   [l1, l2, l3]: Stretches<T>,
 ): T {
-  return terms.reduce(
-    (w, { mu, alpha }) =>
-      w.add(l1.pow(alpha).add(l2.pow(alpha)).add(l3.pow(alpha)).sub(3).mul(mu).div(alpha)),
-    l1.constant(0),
-  );
+  return terms.reduce((w, { mu, alpha }) => {
+    // The standard tests repeat a stretch (uniaxial λ₂ = λ₃, equibiaxial λ₁ = λ₂): power it once.
+    const p1 = l1.pow(alpha);
+    const p2 = l2 === l1 ? p1 : l2.pow(alpha);
+    const p3 = l3 === l2 ? p2 : l3.pow(alpha);
+    return w.add(p1.add(p2).add(p3).sub(3).mul(mu).div(alpha));
+  }, l1.constant(0));
 }
 
 /** Arruda & Boyce (1993) eight-chain: μN[βx + ln(β / sinh β)], x = λc/√N, β = L⁻¹(x). */

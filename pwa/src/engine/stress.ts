@@ -42,8 +42,26 @@ export function uncheckedStress<T extends Liftable<T>>(
   stretch: T,
 ): T {
   return stretch
-    .derivativeOf((l, lift) => strainEnergy(mapConstants(model, lift), modeStretches(mode, l)))
+    .derivativeOf((l, lift) => strainEnergy(liftedModel(model, lift), modeStretches(mode, l)))
     .mul(STRESS_FACTOR[mode]);
+}
+
+/**
+ * The model with its scalar constants brought into the lifted type (numbers stay numbers),
+ * kept per model object: a fit or a load curve evaluates one model at many stretches.
+ */
+const liftedModels = new WeakMap<object, { lift: unknown; model: unknown }>();
+
+function liftedModel<T, U>(
+  model: ModelOf<T | number>,
+  lift: (value: T | number) => U,
+): ModelOf<U | number> {
+  const cached = liftedModels.get(model);
+  // Each scalar type lifts through one fixed function, so the same lift means the same U.
+  if (cached?.lift === lift) return cached.model as ModelOf<U | number>;
+  const lifted = mapConstants(model, (value) => (typeof value === 'number' ? value : lift(value)));
+  liftedModels.set(model, { lift, model: lifted });
+  return lifted;
 }
 
 /**
