@@ -161,7 +161,9 @@ describe('quality desk', () => {
     await expect.poll(() => load.textContent()).not.toBe('');
     expectedLoad = newtons((await load.textContent()) ?? '');
     expect(expectedLoad).toBeGreaterThan(0);
-    await onScreen(page).getByRole('group', { name: 'Shape', exact: true }).scrollIntoViewIfNeeded();
+    await onScreen(page)
+      .getByRole('group', { name: 'Shape', exact: true })
+      .scrollIntoViewIfNeeded();
     await screenshot(page, 'desk-spec-editor');
     await onScreen(page)
       .getByRole('table', { name: 'Acceptance windows' })
@@ -183,6 +185,9 @@ describe('quality desk', () => {
     await onScreen(page).getByRole('link', { name: 'Formula models' }).click();
     await onScreen(page).getByText('Reads correctly.').waitFor();
     await screenshot(page, 'desk-formulas');
+    await onScreen(page).getByLabel('W(I1, I2) =').fill('C10 (I1 - 3) + * C01 (I2 - 3)');
+    await onScreen(page).getByTestId('syntax-marker').waitFor();
+    await screenshot(page, 'desk-formula-error');
 
     await onScreen(page).getByRole('link', { name: 'Set and aging' }).click();
     await onScreen(page)
@@ -204,7 +209,10 @@ describe('quality desk', () => {
     const ea = onScreen(page).getByTestId('activation-energy');
     await ea.waitFor();
     expect(Number((await ea.textContent())?.replace(' kJ/mol', ''))).toBeCloseTo(100, 0);
+    await onScreen(page).getByRole('region', { name: 'Arrhenius fit' }).scrollIntoViewIfNeeded();
     await screenshot(page, 'desk-aging');
+    await onScreen(page).getByRole('region', { name: 'Expected set' }).scrollIntoViewIfNeeded();
+    await screenshot(page, 'desk-aging-predictions');
 
     await onScreen(page).getByRole('link', { name: 'Trends' }).click();
     await onScreen(page).getByRole('heading', { name: 'Trends and capability' }).waitFor();
@@ -213,9 +221,11 @@ describe('quality desk', () => {
     if (seeded) await part.selectOption(seeded);
     await page.waitForTimeout(500);
     await screenshot(page, 'desk-trends');
+    await onScreen(page).getByRole('region', { name: 'Capability' }).scrollIntoViewIfNeeded();
+    await screenshot(page, 'desk-trends-capability');
 
     await onScreen(page).getByRole('link', { name: 'Reports' }).click();
-    await onScreen(page).getByRole('region', { name: 'Fit reports' }).waitFor();
+    await onScreen(page).getByRole('table', { name: 'Lots' }).waitFor();
     await screenshot(page, 'desk-reports');
   });
 

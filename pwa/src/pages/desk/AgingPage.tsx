@@ -144,7 +144,7 @@ export default function AgingPage() {
   return (
     <DeskLayout title="Set and aging">
       <h1>Compression set and aging</h1>
-      <div className="desk-field">
+      <div className="desk-field desk-field--narrow">
         <label htmlFor={`${id}-compound`}>Compound</label>
         <select
           id={`${id}-compound`}

@@ -15,7 +15,7 @@ export function ConstantsTable({ constants, problems, onChange }: Props) {
       <thead>
         <tr>
           <th scope="col">name</th>
-          <th scope="col">value (MPa units as W)</th>
+          <th scope="col">value</th>
           <th scope="col" />
         </tr>
       </thead>

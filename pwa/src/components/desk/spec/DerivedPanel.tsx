@@ -102,7 +102,7 @@ export function DerivedPanel({ derivation, testDeflection, bounded }: Props) {
           </strong>
         </div>
         <div className="desk-stat">
-          Φ = E_c/E₀{' '}
+          Φ = E<sub>c</sub>/E<sub>0</sub>{' '}
           <strong>
             {bounded ? `${formatNumber(load.low.shapeAmplification)} – ` : ''}
             {formatNumber(load.high.shapeAmplification)}

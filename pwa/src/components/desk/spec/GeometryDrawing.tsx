@@ -8,9 +8,10 @@ interface Props {
 const PLAN_BOX = 170;
 const PLAN_X = 30;
 const PLAN_Y = 30;
-const SIDE_X = 290;
+const SIDE_X = 280;
 const SIDE_BOTTOM = 170;
 const MIN_SIDE_HEIGHT = 14;
+const MAX_SIDE_HEIGHT = 130;
 const PLATE = 8;
 
 function mm(value: number): string {
@@ -80,7 +81,7 @@ function Dimension(props: { x1: number; y1: number; x2: number; y2: number; labe
         x={vertical ? x1 + 6 : (x1 + x2) / 2}
         y={vertical ? (y1 + y2) / 2 + 4 : y1 - 5}
         textAnchor={vertical ? 'start' : 'middle'}
-        fontSize="12"
+        fontSize="14"
         fill="currentColor"
       >
         {label}
@@ -179,7 +180,7 @@ function PlanView({ geometry, scale }: { geometry: Geometry; scale: number }) {
             y2={PLAN_Y + h}
             label={mm(geometry.width)}
           />
-          <text x={cx} y={below + 4} textAnchor="middle" fontSize="11" fill="currentColor">
+          <text x={cx} y={below + 4} textAnchor="middle" fontSize="13" fill="currentColor">
             long strip: length ≫ width
           </text>
         </g>
@@ -198,9 +199,10 @@ function SideView({
   bonded: boolean;
 }) {
   const [across] = planExtent(geometry);
-  const w = Math.min(across * scale, 150);
+  const w = Math.min(across * scale, 130);
   const trueHeight = geometry.thickness * scale;
-  const h = Math.max(trueHeight, MIN_SIDE_HEIGHT);
+  // Very thin or very tall layers are drawn at a readable height and marked as not to scale.
+  const h = Math.min(Math.max(trueHeight, MIN_SIDE_HEIGHT), MAX_SIDE_HEIGHT);
   const top = SIDE_BOTTOM - h;
   return (
     <g>
@@ -240,11 +242,11 @@ function SideView({
         x={SIDE_X + w / 2}
         y={SIDE_BOTTOM + 26}
         textAnchor="middle"
-        fontSize="11"
+        fontSize="13"
         fill="currentColor"
       >
         {bonded ? 'bonded to plates' : 'faces free to slip'}
-        {trueHeight < MIN_SIDE_HEIGHT ? ' · height not to scale' : ''}
+        {h !== trueHeight ? ' · height not to scale' : ''}
       </text>
     </g>
   );
@@ -258,16 +260,16 @@ export function GeometryDrawing({ geometry, bonded }: Props) {
   const scale = usable ? PLAN_BOX / largest : 1;
   return (
     <svg
-      viewBox="0 0 480 240"
+      viewBox="0 0 500 250"
       role="img"
       aria-label={`Drawing of the ${geometry.shape}`}
       className="desk-drawing"
     >
       <Arrowheads />
-      <text x={PLAN_X} y={16} fontSize="11" fill="currentColor">
+      <text x={PLAN_X} y={16} fontSize="13" fill="currentColor">
         plan
       </text>
-      <text x={SIDE_X} y={16} fontSize="11" fill="currentColor">
+      <text x={SIDE_X} y={16} fontSize="13" fill="currentColor">
         side
       </text>
       {usable ? (

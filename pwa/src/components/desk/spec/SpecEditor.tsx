@@ -106,7 +106,7 @@ export function SpecEditor({ initial, compounds, readOnly, frozenFit, actions }:
         {actions?.(result.body)}
       </div>
       <div>
-        <div style={{ position: 'sticky', top: '4rem' }}>
+        <div className="desk-follow">
           {result.body && <CautionNote body={result.body} />}
           <Derived body={result.body} compounds={compounds} frozenFit={frozenFit} />
         </div>

@@ -71,6 +71,7 @@ export function ToleranceSection({ fields, onChange, readOnly }: SectionProps) {
                 <td>
                   <DeskSelect
                     label={`class of ${name}`}
+                    hideLabel
                     value={tolClass}
                     options={CLASSES}
                     onChange={(c) => setDimension(name, { class: c })}
@@ -79,6 +80,7 @@ export function ToleranceSection({ fields, onChange, readOnly }: SectionProps) {
                 <td>
                   <DeskSelect
                     label={`kind of ${name}`}
+                    hideLabel
                     value={kind}
                     options={KINDS}
                     onChange={(k) => setDimension(name, { kind: k })}

@@ -56,6 +56,7 @@ export function ControlChart({ title, points, centre, upper, lower, onOpenLot }:
   const reference = (y: number, label: string, dashed: boolean) => (
     <ReferenceLine
       y={y}
+      ifOverflow="extendDomain"
       stroke={dashed ? 'var(--gs-out)' : 'var(--gs-within)'}
       strokeDasharray={dashed ? '6 4' : undefined}
       label={{ value: `${label} ${formatNumber(y)}`, position: 'right', fontSize: 11 }}

@@ -52,7 +52,7 @@ export function TrendCharts({ rows, characteristic, revision }: Props) {
       </p>
       <div className="desk-split">
         <ControlChart
-          title={`X̄ chart — ${label}, ${unit}`}
+          title={`Lot means (X̄ chart) — ${label}, ${unit}`}
           points={points(chart.means)}
           centre={chart.grandMean}
           upper={chart.xbarUcl}
@@ -60,7 +60,7 @@ export function TrendCharts({ rows, characteristic, revision }: Props) {
           onOpenLot={openLot}
         />
         <ControlChart
-          title={`R chart — ${label}, ${unit}`}
+          title={`Lot ranges (R chart) — ${label}, ${unit}`}
           points={points(chart.ranges)}
           centre={chart.meanRange}
           upper={chart.rUcl}
