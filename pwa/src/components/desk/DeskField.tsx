@@ -44,6 +44,8 @@ interface SelectProps<T extends string> {
   options: readonly (readonly [T, string])[];
   onChange(value: T): void;
   disabled?: boolean;
+  /** Inside a table the column heading says what it is; the label stays for screen readers. */
+  hideLabel?: boolean;
 }
 
 export function DeskSelect<T extends string>({
@@ -52,11 +54,14 @@ export function DeskSelect<T extends string>({
   options,
   onChange,
   disabled,
+  hideLabel,
 }: SelectProps<T>) {
   const id = useId();
   return (
     <div className="desk-field">
-      <label htmlFor={id}>{label}</label>
+      <label htmlFor={id} className={hideLabel ? 'desk-visually-hidden' : undefined}>
+        {label}
+      </label>
       <select
         id={id}
         value={value}

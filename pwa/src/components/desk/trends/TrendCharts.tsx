@@ -52,7 +52,7 @@ export function TrendCharts({ rows, characteristic, revision }: Props) {
       </p>
       <div className="desk-split">
         <ControlChart
-          title={`Lot means (X̄ chart) — ${label}, ${unit}`}
+          title={`Lot means (X-bar chart) — ${label}, ${unit}`}
           points={points(chart.means)}
           centre={chart.grandMean}
           upper={chart.xbarUcl}
