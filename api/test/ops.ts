@@ -16,9 +16,7 @@ export interface Tablet {
   deviceId: string;
   token: string;
   userId: string;
-  push: (
-    operations: Op[],
-  ) => Promise<{
+  push: (operations: Op[]) => Promise<{
     status: number;
     body: { results: { opId: string; status: string; reason?: string }[] };
   }>;

@@ -1,25 +1,27 @@
 import { Type } from 'class-transformer';
-import { IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
+import { IsInt, IsString, Max, MaxLength, Min } from 'class-validator';
+import { Optional } from '../../common/optional.js';
 
 export class AuditQueryDto {
-  @IsOptional()
+  @Optional()
   @IsString()
   @MaxLength(40)
   entity?: string;
 
-  @IsOptional()
+  @Optional()
   @IsString()
   @MaxLength(64)
   entityId?: string;
 
   /** Page backwards: entries with an id below this one. */
-  @IsOptional()
+  @Optional()
   @Type(() => Number)
   @IsInt()
   @Min(1)
+  @Max(2_147_483_647) // a SQL integer (32-bit on PostgreSQL)
   before?: number;
 
-  @IsOptional()
+  @Optional()
   @Type(() => Number)
   @IsInt()
   @Min(1)

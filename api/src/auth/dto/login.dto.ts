@@ -1,4 +1,5 @@
-import { IsEmail, IsOptional, IsString, IsUUID, MaxLength } from 'class-validator';
+import { IsEmail, IsString, IsUUID, MaxLength } from 'class-validator';
+import { Optional } from '../../common/optional.js';
 
 export class LoginDto {
   @IsEmail()
@@ -11,7 +12,7 @@ export class LoginDto {
   password: string;
 
   /** The tablet's stable id; binds this sign-in to the device for sync authorship. */
-  @IsOptional()
+  @Optional()
   @IsUUID()
   deviceId?: string;
 }

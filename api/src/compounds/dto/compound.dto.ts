@@ -5,17 +5,18 @@ import {
   ArrayUnique,
   IsArray,
   IsIn,
-  IsOptional,
   IsString,
   IsUUID,
   Length,
   Matches,
   ValidateNested,
+  IsObject,
 } from 'class-validator';
 import { Finite } from '../../common/numbers.js';
 import { MODES, type Mode } from '../../engine.js';
 import { POLYMERS, type Polymer } from '../entities/compound.entity.js';
 import { MODEL_TYPES, ModelDto, type ModelBody } from './model.dto.js';
+import { Optional } from '../../common/optional.js';
 
 export class CreateCompoundDto {
   @IsString()
@@ -36,7 +37,7 @@ export class CreateCompoundDto {
   hardnessShoreA: number;
 
   /** Rubbers lie around 1000–3000 MPa. */
-  @IsOptional()
+  @Optional()
   @Finite(100, 10_000)
   bulkModulusMPa?: number;
 }
@@ -59,7 +60,7 @@ export class CreateTestSetDto {
   @IsIn(MODES)
   mode: Mode;
 
-  @IsOptional()
+  @Optional()
   @Finite(-80, 300)
   temperatureC?: number;
 
@@ -73,6 +74,7 @@ export class CreateTestSetDto {
 
 export class CreateFitDto {
   /** The starting point; the fit comes back in the same shape. */
+  @IsObject()
   @ValidateNested()
   @Type(() => ModelDto, MODEL_TYPES)
   model: ModelBody;

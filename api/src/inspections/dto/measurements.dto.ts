@@ -1,47 +1,49 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsOptional, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, ArrayMinSize, IsArray, ValidateNested, IsObject } from 'class-validator';
 import { Finite } from '../../common/numbers.js';
+import { Optional } from '../../common/optional.js';
 
 /** Plan dimensions as measured, named as in the spec's geometry (mm). */
 export class DimensionsDto {
-  @IsOptional()
+  @Optional()
   @Finite(0.1, 3000)
   diameter?: number;
 
-  @IsOptional()
+  @Optional()
   @Finite(0.1, 3000)
   outerDiameter?: number;
 
-  @IsOptional()
+  @Optional()
   @Finite(0.1, 3000)
   innerDiameter?: number;
 
-  @IsOptional()
+  @Optional()
   @Finite(0.1, 3000)
   side?: number;
 
-  @IsOptional()
+  @Optional()
   @Finite(0.1, 3000)
   length?: number;
 
-  @IsOptional()
+  @Optional()
   @Finite(0.1, 3000)
   width?: number;
 }
 
 /** One sampled part's readings; each is optional because a plan may not call for all of them. */
 export class Measurements {
-  @IsOptional()
+  @Optional()
   @Finite(0.05, 500)
   thickness?: number;
 
-  @IsOptional()
+  @Optional()
+  @IsObject()
   @ValidateNested()
   @Type(() => DimensionsDto)
   dimensions?: DimensionsDto;
 
   /** Shore A durometer readings: 3 or 5 are usual, the median counts. */
-  @IsOptional()
+  @Optional()
   @IsArray()
   @ArrayMinSize(1)
   @ArrayMaxSize(5)
@@ -49,12 +51,12 @@ export class Measurements {
   hardness?: number[];
 
   /** N, read at the spec's test deflection. */
-  @IsOptional()
+  @Optional()
   @Finite(0, 10_000_000)
   load?: number;
 
   /** From a compression-set test piece of the lot (ASTM D395 B / ISO 815-1), percent. */
-  @IsOptional()
+  @Optional()
   @Finite(0, 100)
   compressionSetPercent?: number;
 }

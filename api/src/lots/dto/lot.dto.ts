@@ -4,7 +4,6 @@ import {
   IsIn,
   IsInt,
   IsISO8601,
-  IsOptional,
   IsString,
   IsUUID,
   Length,
@@ -12,37 +11,38 @@ import {
   Min,
 } from 'class-validator';
 import { DISPOSITION_ACTIONS, type DispositionAction } from '../entities/disposition.entity.js';
+import { Optional } from '../../common/optional.js';
 
 export class LotQueryDto {
-  @IsOptional()
+  @Optional()
   @IsIn(['open', 'submitted'])
   status?: 'open' | 'submitted';
 
   /** `true`: the review queue — flagged and without a disposition. */
-  @IsOptional()
+  @Optional()
   @Transform(({ value }: { value: unknown }) =>
     value === 'true' ? true : value === 'false' ? false : value,
   )
   @IsBoolean()
   flagged?: boolean;
 
-  @IsOptional()
+  @Optional()
   @IsUUID()
   pressId?: string;
 
-  @IsOptional()
+  @Optional()
   @IsUUID()
   specId?: string;
 
-  @IsOptional()
+  @Optional()
   @IsISO8601({ strict: true })
   from?: string;
 
-  @IsOptional()
+  @Optional()
   @IsISO8601({ strict: true })
   to?: string;
 
-  @IsOptional()
+  @Optional()
   @Type(() => Number)
   @IsInt()
   @Min(1)

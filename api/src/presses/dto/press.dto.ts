@@ -1,15 +1,6 @@
-import {
-  IsBoolean,
-  IsIn,
-  IsNumber,
-  IsOptional,
-  IsString,
-  Length,
-  Matches,
-  Max,
-  Min,
-} from 'class-validator';
+import { IsBoolean, IsIn, IsNumber, IsString, Length, Matches, Max, Min } from 'class-validator';
 import { PRESS_KINDS, type PressKind } from '../entities/press.entity.js';
+import { Optional } from '../../common/optional.js';
 
 const finite = { allowNaN: false, allowInfinity: false } as const;
 
@@ -29,7 +20,7 @@ export class CreatePressDto {
   kind: PressKind;
 
   /** Rubber presses run from bench-top (tens of kN) to very large (tens of MN). */
-  @IsOptional()
+  @Optional()
   @IsNumber(finite)
   @Min(1)
   @Max(100_000)
@@ -37,22 +28,22 @@ export class CreatePressDto {
 }
 
 export class UpdatePressDto {
-  @IsOptional()
+  @Optional()
   @IsString()
   @Length(1, 120)
   name?: string;
 
-  @IsOptional()
+  @Optional()
   @IsIn(PRESS_KINDS)
   kind?: PressKind;
 
-  @IsOptional()
+  @Optional()
   @IsNumber(finite)
   @Min(1)
   @Max(100_000)
   clampForceKn?: number;
 
-  @IsOptional()
+  @Optional()
   @IsBoolean()
   active?: boolean;
 }

@@ -1,5 +1,6 @@
-import { Equals, IsIn, IsOptional } from 'class-validator';
+import { Equals, IsIn } from 'class-validator';
 import { Finite } from '../../common/numbers.js';
+import { Optional } from '../../common/optional.js';
 
 export const SHAPES = ['disc', 'annulus', 'square', 'rectangle', 'strip'] as const;
 
@@ -71,7 +72,7 @@ export class StripDto {
   width: number;
 
   /** A strip is long enough to ignore its ends; a length makes loads total rather than per mm. */
-  @IsOptional()
+  @Optional()
   @Finite(...PLAN)
   length?: number;
 

@@ -1,8 +1,9 @@
 import { Type } from 'class-transformer';
-import { IsBoolean, IsIn, IsOptional, IsUUID, ValidateNested } from 'class-validator';
+import { IsBoolean, IsIn, IsUUID, ValidateNested, IsObject } from 'class-validator';
 import { Finite } from '../../common/numbers.js';
 import { PREFERRED_AQLS } from '../../engine.js';
 import { GEOMETRY_TYPES, GeometryDto, type Geometry } from './geometry.dto.js';
+import { Optional } from '../../common/optional.js';
 
 export const TOLERANCE_CLASSES = ['M1', 'M2', 'M3', 'M4'] as const;
 export const LEVELS = ['I', 'II', 'III'] as const;
@@ -21,37 +22,44 @@ export class DimensionClassDto {
 
 /** Per-dimension classes where the drawing differs from the spec's general class. */
 export class DimensionClassesDto {
-  @IsOptional()
+  @Optional()
+  @IsObject()
   @ValidateNested()
   @Type(() => DimensionClassDto)
   thickness?: DimensionClassDto;
 
-  @IsOptional()
+  @Optional()
+  @IsObject()
   @ValidateNested()
   @Type(() => DimensionClassDto)
   diameter?: DimensionClassDto;
 
-  @IsOptional()
+  @Optional()
+  @IsObject()
   @ValidateNested()
   @Type(() => DimensionClassDto)
   outerDiameter?: DimensionClassDto;
 
-  @IsOptional()
+  @Optional()
+  @IsObject()
   @ValidateNested()
   @Type(() => DimensionClassDto)
   innerDiameter?: DimensionClassDto;
 
-  @IsOptional()
+  @Optional()
+  @IsObject()
   @ValidateNested()
   @Type(() => DimensionClassDto)
   side?: DimensionClassDto;
 
-  @IsOptional()
+  @Optional()
+  @IsObject()
   @ValidateNested()
   @Type(() => DimensionClassDto)
   length?: DimensionClassDto;
 
-  @IsOptional()
+  @Optional()
+  @IsObject()
   @ValidateNested()
   @Type(() => DimensionClassDto)
   width?: DimensionClassDto;
@@ -62,19 +70,20 @@ export class ToleranceDto {
   @IsIn(TOLERANCE_CLASSES)
   class: ToleranceClass;
 
-  @IsOptional()
+  @Optional()
+  @IsObject()
   @ValidateNested()
   @Type(() => DimensionClassesDto)
   dimensions?: DimensionClassesDto;
 }
 
 export class MechanicsDto {
-  @IsOptional()
+  @Optional()
   @IsIn(['none', 'gent-lindley', 'lubrication'])
   bulkCorrection?: 'none' | 'gent-lindley' | 'lubrication';
 
   /** Lindley's material factor k; read from the hardness defaults when absent. */
-  @IsOptional()
+  @Optional()
   @Finite(0, 2)
   materialFactor?: number;
 }
@@ -102,6 +111,7 @@ export class SamplingDto {
 }
 
 export class SpecBody {
+  @IsObject()
   @ValidateNested()
   @Type(() => GeometryDto, GEOMETRY_TYPES)
   geometry: Geometry;
@@ -110,7 +120,7 @@ export class SpecBody {
   bonded: boolean;
 
   /** Unbonded parts: 'friction' gives lubricated and bonded loads as bounds. */
-  @IsOptional()
+  @Optional()
   @IsIn(['friction', 'lubricated'])
   unbondedFaces?: 'friction' | 'lubricated';
 
@@ -125,23 +135,27 @@ export class SpecBody {
   @Finite(0.5, 50)
   loadTolerancePercent: number;
 
+  @IsObject()
   @ValidateNested()
   @Type(() => ToleranceDto)
   tolerance: ToleranceDto;
 
+  @IsObject()
   @ValidateNested()
   @Type(() => HardnessSpecDto)
   hardness: HardnessSpecDto;
 
-  @IsOptional()
+  @Optional()
   @Finite(1, 100)
   compressionSetLimitPercent?: number;
 
+  @IsObject()
   @ValidateNested()
   @Type(() => SamplingDto)
   sampling: SamplingDto;
 
-  @IsOptional()
+  @Optional()
+  @IsObject()
   @ValidateNested()
   @Type(() => MechanicsDto)
   mechanics?: MechanicsDto;

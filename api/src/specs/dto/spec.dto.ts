@@ -1,4 +1,5 @@
-import { IsOptional, IsString, Length, Matches } from 'class-validator';
+import { IsString, Length, Matches } from 'class-validator';
+import { Optional } from '../../common/optional.js';
 
 export class CreateSpecDto {
   @IsString()
@@ -12,7 +13,7 @@ export class CreateSpecDto {
   @Length(1, 120)
   name: string;
 
-  @IsOptional()
+  @Optional()
   @IsString()
   @Length(0, 1000)
   description?: string;

@@ -3,7 +3,6 @@ import {
   IsBoolean,
   IsIn,
   IsISO8601,
-  IsOptional,
   IsString,
   IsUUID,
   Length,
@@ -11,6 +10,7 @@ import {
   ValidateNested,
   registerDecorator,
   type ValidationOptions,
+  IsObject,
 } from 'class-validator';
 import { Finite, WholeNumber } from '../../common/numbers.js';
 import {
@@ -19,6 +19,7 @@ import {
   DEFECT_TYPES,
 } from '../../inspections/entities/defect.entity.js';
 import { Measurements } from '../../inspections/dto/measurements.dto.js';
+import { Optional } from '../../common/optional.js';
 
 export class LotOpenPayload {
   @IsUUID()
@@ -85,7 +86,7 @@ export class DeviceVerdictDto {
   conforming: boolean;
 
   // A map rather than a list of objects: validating nested objects is what a push spends on.
-  @IsOptional()
+  @Optional()
   @IsStatuses()
   characteristics?: Record<string, (typeof STATUSES)[number]>;
 }
@@ -100,14 +101,16 @@ export class InspectionRecordPayload {
   @WholeNumber(1, 2000)
   sampleIndex: number;
 
-  @IsOptional()
+  @Optional()
   @IsUUID()
   supersedes?: string;
 
+  @IsObject()
   @ValidateNested()
   @Type(() => Measurements)
   measurements: Measurements;
 
+  @IsObject()
   @ValidateNested()
   @Type(() => DeviceVerdictDto)
   deviceVerdict: DeviceVerdictDto;
@@ -120,7 +123,7 @@ export class DefectRecordPayload {
   @IsUUID()
   lotId: string;
 
-  @IsOptional()
+  @Optional()
   @IsUUID()
   inspectionId?: string;
 
@@ -133,16 +136,16 @@ export class DefectRecordPayload {
   @IsIn(DEFECT_SEVERITIES)
   severity: (typeof DEFECT_SEVERITIES)[number];
 
-  @IsOptional()
+  @Optional()
   @Finite(0.01, 3000)
   sizeMm?: number;
 
-  @IsOptional()
+  @Optional()
   @IsString()
   @Length(0, 1000)
   note?: string;
 
-  @IsOptional()
+  @Optional()
   @Matches(/^[0-9a-f]{64}$/, { message: 'photoSha256 must be 64 lowercase hex digits' })
   photoSha256?: string;
 }
@@ -159,6 +162,7 @@ export class LotSubmitPayload {
   @IsUUID()
   lotId: string;
 
+  @IsObject()
   @ValidateNested()
   @Type(() => DeviceLotVerdictDto)
   deviceVerdict: DeviceLotVerdictDto;
