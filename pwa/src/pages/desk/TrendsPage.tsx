@@ -2,6 +2,7 @@ import { useId } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { useMeasurements, usePresses } from '../../api/desk/lots';
 import { useSpec, useSpecs } from '../../api/desk/specs';
+import { DeskSelect } from '../../components/desk/DeskField';
 import { DeskLayout } from '../../components/desk/DeskLayout';
 import { QueryState } from '../../components/desk/QueryState';
 import { CHARACTERISTICS, type Characteristic } from '../../components/desk/trends/subgroups';
@@ -32,16 +33,7 @@ export default function TrendsPage() {
   };
 
   const select = (key: string, label: string, value: string, options: [string, string][]) => (
-    <div className="desk-field">
-      <label htmlFor={`${id}-${key}`}>{label}</label>
-      <select id={`${id}-${key}`} value={value} onChange={(e) => set(key, e.target.value)}>
-        {options.map(([v, text]) => (
-          <option key={v} value={v}>
-            {text}
-          </option>
-        ))}
-      </select>
-    </div>
+    <DeskSelect label={label} value={value} options={options} onChange={(v) => set(key, v)} />
   );
 
   return (
