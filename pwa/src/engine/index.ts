@@ -13,7 +13,14 @@ export { STEP, type Liftable, type LiftedFunction, type Scalar } from './scalar.
 export { Real } from './real.js';
 export { Complex } from './complex.js';
 export { Bicomplex } from './bicomplex.js';
-export { derivative, gradient, hessian, secondDerivative } from './derivatives.js';
+export {
+  derivative,
+  gradient,
+  gradientAndHessian,
+  hessian,
+  secondDerivative,
+  type SecondOrder,
+} from './derivatives.js';
 
 // Material models written as strain energies (REFERENCES §2)
 export {

@@ -149,7 +149,7 @@ function lmpar(
 
 function columnNorms(jacobian: readonly (readonly number[])[], n: number): number[] {
   const sums = new Array<number>(n).fill(0);
-  for (const row of jacobian) for (let j = 0; j < n; j++) sums[j]! += row[j]! * row[j]!;
+  for (const row of jacobian) for (let j = 0; j < n; j++) sums[j] = sums[j]! + row[j]! * row[j]!;
   return sums.map(Math.sqrt);
 }
 

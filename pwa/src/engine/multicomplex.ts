@@ -331,16 +331,24 @@ export class LiftedMultiComplex implements Scalar<LiftedMultiComplex> {
 /** Parts of x·y: b·a′ + a·b′ on iⱼ, a·d′ + d·a′ + b·c′ + c·b′ on i₀iⱼ (the bicomplex rule). */
 function product(x: LiftedMultiComplex, y: LiftedMultiComplex): Parts {
   const [dx, dy] = [x.d, y.d];
-  if (dx === null && dy === null) return null;
-  const k = (dx ?? dy)!.length / 2;
+  if (dx === null) return dy === null ? null : oneSided(dy, x.re, x.lifted);
+  if (dy === null) return oneSided(dx, y.re, y.lifted);
+  const k = dx.length / 2;
   const out = new Array<number>(2 * k);
   for (let j = 0; j < k; j++) {
-    const bx = dx === null ? 0 : dx[j]!;
-    const by = dy === null ? 0 : dy[j]!;
-    const crossX = dx === null ? 0 : dx[k + j]!;
-    const crossY = dy === null ? 0 : dy[k + j]!;
-    out[j] = bx * y.re + x.re * by;
-    out[k + j] = x.re * crossY + crossX * y.re + bx * y.lifted + x.lifted * by;
+    out[j] = dx[j]! * y.re + x.re * dy[j]!;
+    out[k + j] = x.re * dy[k + j]! + dx[k + j]! * y.re + dx[j]! * y.lifted + x.lifted * dy[j]!;
+  }
+  return out;
+}
+
+/** Parts of x·y when only y has any: a·b′ and a·d′ + c·b′. */
+function oneSided(d: readonly number[], re: number, lifted: number): number[] {
+  const k = d.length / 2;
+  const out = new Array<number>(2 * k);
+  for (let j = 0; j < k; j++) {
+    out[j] = re * d[j]!;
+    out[k + j] = re * d[k + j]! + lifted * d[j]!;
   }
   return out;
 }
