@@ -124,21 +124,22 @@ function fitProblem(
   maxI1: number,
 ): LeastSquaresProblem {
   return {
-    residuals(values) {
+    evaluate(values) {
       const model = withParameters<number>(shape, values);
       if (boundViolation(model, maxI1)) return null;
-      const residuals = points.map(
-        (p, i) => scales[i]! * (uncheckedStress(model, p.mode, new Real(p.stretch)).re - p.stress),
-      );
-      return residuals.every(Number.isFinite) ? residuals : null;
-    },
-    jacobian(values) {
-      // All constants stepped at once, each on its own unit: one pass per point gives the row.
-      const model = withParameters<MultiComplex | number>(shape, MultiComplex.seed(values));
-      return points.map((p, i) => {
-        const stress = uncheckedStress(model, p.mode, new MultiComplex(p.stretch, null));
-        return values.map((_, j) => (scales[i]! * stress.part(j)) / STEP);
-      });
+      // All constants stepped at once, each on its own unit: one pass per point gives the
+      // stress (real part) and its Jacobian row.
+      const stepped = withParameters<MultiComplex | number>(shape, MultiComplex.seed(values));
+      const residuals: number[] = [];
+      const jacobian: number[][] = [];
+      for (const [i, p] of points.entries()) {
+        const stress = uncheckedStress(stepped, p.mode, new MultiComplex(p.stretch, null));
+        const scale = scales[i]!;
+        if (!stress.isFinite()) return null;
+        residuals.push(scale * (stress.re - p.stress));
+        jacobian.push(values.map((_, j) => (scale * stress.part(j)) / STEP));
+      }
+      return { residuals, jacobian };
     },
   };
 }
@@ -254,7 +255,7 @@ export function fitModel(options: FitOptions): FitResult {
   // Each start gets a short run; the most promising one is carried on to convergence.
   const screened = candidates.flatMap((candidate) => {
     const x0 = parametersOf(candidate);
-    if (!problem.residuals(x0)) return [];
+    if (!problem.evaluate(x0)) return [];
     return [
       levenbergMarquardt(
         problem,

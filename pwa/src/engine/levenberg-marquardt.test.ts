@@ -10,11 +10,13 @@ import { levenbergMarquardt, type LeastSquaresProblem } from './levenberg-marqua
 describe('Levenberg–Marquardt on test problems (Moré, Garbow & Hillstrom 1981)', () => {
   it('Rosenbrock, r = (10(x₂ − x₁²), 1 − x₁) from (−1.2, 1), reaches (1, 1)', () => {
     const rosenbrock: LeastSquaresProblem = {
-      residuals: ([a, b]) => [10 * (b! - a! * a!), 1 - a!],
-      jacobian: ([a]) => [
-        [-20 * a!, 10],
-        [-1, 0],
-      ],
+      evaluate: ([a, b]) => ({
+        residuals: [10 * (b! - a! * a!), 1 - a!],
+        jacobian: [
+          [-20 * a!, 10],
+          [-1, 0],
+        ],
+      }),
     };
     const fit = levenbergMarquardt(rosenbrock, [-1.2, 1]);
     expect(fit.x[0]).toBeCloseTo(1, 10);
@@ -28,8 +30,10 @@ describe('Levenberg–Marquardt on test problems (Moré, Garbow & Hillstrom 1981
     const t = Array.from({ length: 20 }, (_, i) => 1 + 2 * i);
     const y = t.map((v) => 0.2 * v + 3e-5 * v ** 3 + 0.01 * Math.sin(v));
     const problem: LeastSquaresProblem = {
-      residuals: ([a, b]) => t.map((v, i) => a! * v + b! * v ** 3 - y[i]!),
-      jacobian: () => t.map((v) => [v, v ** 3]),
+      evaluate: ([a, b]) => ({
+        residuals: t.map((v, i) => a! * v + b! * v ** 3 - y[i]!),
+        jacobian: t.map((v) => [v, v ** 3]),
+      }),
     };
     const fit = levenbergMarquardt(problem, [1, 1]);
     const sum = (f: (v: number, i: number) => number) => t.reduce((acc, v, i) => acc + f(v, i), 0);
@@ -44,15 +48,14 @@ describe('Levenberg–Marquardt on test problems (Moré, Garbow & Hillstrom 1981
   it('refuses trial points outside the domain and stays inside it', () => {
     // Minimise (log x − 3)² with x > 0 from x = 0.5: steps that leave the domain are refused.
     const problem: LeastSquaresProblem = {
-      residuals: ([x]) => (x! > 0 ? [Math.log(x!) - 3] : null),
-      jacobian: ([x]) => [[1 / x!]],
+      evaluate: ([x]) => (x! > 0 ? { residuals: [Math.log(x!) - 3], jacobian: [[1 / x!]] } : null),
     };
     const fit = levenbergMarquardt(problem, [0.5]);
     expect(fit.x[0]).toBeCloseTo(Math.exp(3), 8);
   });
 
   it('throws when the start is outside the domain', () => {
-    const problem: LeastSquaresProblem = { residuals: () => null, jacobian: () => [[1]] };
+    const problem: LeastSquaresProblem = { evaluate: () => null };
     expect(() => levenbergMarquardt(problem, [0])).toThrow(EngineInputError);
   });
 });

@@ -13,11 +13,19 @@ import {
  * actual/predicted reduction ≥ 1e-4, stops on ftol / xtol / gtol and says which.
  */
 
+export interface Evaluation {
+  readonly residuals: number[];
+  /** One row per residual. */
+  readonly jacobian: number[][];
+}
+
 export interface LeastSquaresProblem {
-  /** Residuals at x, or null where x lies outside the problem's domain (the step is refused). */
-  residuals(x: readonly number[]): number[] | null;
-  /** Jacobian (one row per residual) at a point `residuals` accepted. */
-  jacobian(x: readonly number[]): number[][];
+  /**
+   * Residuals and Jacobian at x, or null where x lies outside the problem's domain (the step
+   * is refused). Both at once: with multicomplex steps the Jacobian pass yields the residuals
+   * too, so a trial point costs one pass and, when accepted, needs no second one.
+   */
+  evaluate(x: readonly number[]): Evaluation | null;
 }
 
 export interface LevenbergMarquardtOptions {
@@ -39,7 +47,7 @@ export interface LevenbergMarquardtResult {
   readonly cost: number;
   /** Jacobian evaluations (outer iterations). */
   readonly iterations: number;
-  /** Residual evaluations, the start included. */
+  /** Evaluations, the start included. */
   readonly evaluations: number;
   readonly stopReason: StopReason;
 }
@@ -172,9 +180,9 @@ export function levenbergMarquardt(
   const n = start.length;
   const { ftol = 1e-10, xtol = 1e-10, gtol = 1e-10, maxEvaluations = 200 * (n + 1) } = options;
   let x = [...start];
-  const first = problem.residuals(x);
+  const first = problem.evaluate(x);
   if (!first) throw new EngineInputError('start', 'lies outside the range the model is defined on');
-  let residuals = first;
+  let { residuals, jacobian } = first;
   let fnorm = euclideanNorm(residuals);
   let evaluations = 1;
   let iterations = 0;
@@ -193,7 +201,6 @@ export function levenbergMarquardt(
 
   for (;;) {
     iterations++;
-    const jacobian = problem.jacobian(x);
     const qr = qrFactor(jacobian, residuals);
     const norms = columnNorms(jacobian, n);
     if (iterations === 1) {
@@ -220,9 +227,9 @@ export function levenbergMarquardt(
       const trial = x.map((v, j) => v + lm.step[j]!);
       const pnorm = scaledNorm(diag, lm.step);
       if (iterations === 1) delta = Math.min(delta, pnorm);
-      const trialResiduals = problem.residuals(trial);
+      const evaluation = problem.evaluate(trial);
       evaluations++;
-      const fnorm1 = trialResiduals ? euclideanNorm(trialResiduals) : Number.POSITIVE_INFINITY;
+      const fnorm1 = evaluation ? euclideanNorm(evaluation.residuals) : Number.POSITIVE_INFINITY;
 
       const actred = 0.1 * fnorm1 < fnorm ? 1 - (fnorm1 / fnorm) ** 2 : -1;
       const temp1 = triangularProductNorm(qr.r, lm.step) / fnorm;
@@ -240,10 +247,10 @@ export function levenbergMarquardt(
         delta = pnorm / 0.5;
         par *= 0.5;
       }
-      const accepted = ratio >= 1e-4 && trialResiduals !== null;
+      const accepted = ratio >= 1e-4 && evaluation !== null;
       if (accepted) {
         x = trial;
-        residuals = trialResiduals;
+        ({ residuals, jacobian } = evaluation);
         fnorm = fnorm1;
         xnorm = scaledNorm(diag, x);
       }
