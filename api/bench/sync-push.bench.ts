@@ -112,8 +112,6 @@ if (opened.results.some((r) => r.status !== 'applied'))
 // What a tablet would send: the part's readings near nominal, and the verdict it showed.
 let state = 42;
 const jitter = () => ((state = (state * 16807) % 2147483647) / 2147483647 - 0.5) * 0.02;
-// The server stores its own full verdict beside the device's summary; the raw rows do too.
-const verdicts = new Map<string, object>();
 const batches: Op[][] = lotIds.map((lotId) =>
   Array.from({ length: BATCH }, (_, i) => {
     const measurements = {
@@ -121,15 +119,12 @@ const batches: Op[][] = lotIds.map((lotId) =>
       hardness: [0, 1, 2].map(() => Math.round(nominal.hardness.nominal + jitter() * 100)),
       load: Math.round(prepared.expected.low.load * (1 + jitter() * 3)),
     };
-    const id = randomUUID();
-    const verdict = partVerdict(prepared, measurements);
-    verdicts.set(id, verdict);
     return op('inspection.record', {
-      id,
+      id: randomUUID(),
       lotId,
       sampleIndex: i + 1,
       measurements,
-      deviceVerdict: deviceVerdictOf(verdict),
+      deviceVerdict: deviceVerdictOf(partVerdict(prepared, measurements)),
     });
   }),
 );
@@ -142,56 +137,79 @@ for (const batch of batches) {
 }
 const apiSeconds = (performance.now() - started) / 1000;
 server.kill('SIGINT');
+await new Promise((resolve) => server.on('exit', resolve));
 
-// The same rows, straight into SQLite with one prepared statement in one transaction.
+/*
+ * The floor: exactly the rows the push stored for those records — the inspections, the applied-op
+ * log and the audit entries — read back from the server's file and inserted again with raw
+ * better-sqlite3 into the same schema (foreign keys on, as in the server), one prepared statement
+ * per table, in one transaction. The rows they refer to are copied first, untimed.
+ */
+const MEASURED = ['inspections', 'applied_ops', 'audit_log'];
+type Row = Record<string, unknown>;
+const stored = new Database(join(dataDir, 'gumshoe.sqlite'), { readonly: true });
+const schema = stored
+  .prepare(
+    "SELECT name, type, sql FROM sqlite_master WHERE sql IS NOT NULL AND name NOT LIKE 'sqlite_%'",
+  )
+  .all() as {
+  name: string;
+  type: string;
+  sql: string;
+}[];
+const tables = schema.filter((s) => s.type === 'table').map((s) => s.name);
+const lotList = lotIds.map((id) => `'${id}'`).join(',');
+const measured: Record<string, Row[]> = {
+  inspections: stored
+    .prepare(`SELECT * FROM inspections WHERE lotId IN (${lotList})`)
+    .all() as Row[],
+  applied_ops: stored
+    .prepare(`SELECT * FROM applied_ops WHERE type = 'inspection.record'`)
+    .all() as Row[],
+  audit_log: stored
+    .prepare(`SELECT * FROM audit_log WHERE action = 'inspection.record'`)
+    .all() as Row[],
+};
+const context = Object.fromEntries(
+  tables
+    .filter((t) => !MEASURED.includes(t))
+    .map((t) => [t, stored.prepare(`SELECT * FROM "${t}"`).all() as Row[]]),
+);
+stored.close();
 const raw = new Database(join(dataDir, 'raw.sqlite'));
 raw.pragma('journal_mode = WAL');
-raw.exec(`CREATE TABLE inspections (id varchar(36) PRIMARY KEY, lotId varchar(36), sampleIndex integer,
-  supersedesId varchar(36), measurements text, deviceVerdict text, serverVerdict text, conforming boolean,
-  authorId varchar(36), deviceId varchar(36), recordedAt datetime, receivedAt datetime)`);
-const insert = raw.prepare(
-  'INSERT INTO inspections VALUES (?, ?, ?, NULL, ?, ?, ?, ?, ?, ?, ?, ?)',
-);
+raw.pragma('foreign_keys = ON');
+for (const { sql } of schema) raw.exec(sql);
+const inserter = (table: string, rows: Row[]) => {
+  const columns = Object.keys(rows[0] ?? {});
+  const statement = raw.prepare(
+    `INSERT INTO "${table}" (${columns.map((c) => `"${c}"`).join(', ')}) VALUES (${columns.map(() => '?').join(', ')})`,
+  );
+  return () => {
+    for (const row of rows) statement.run(...columns.map((c) => row[c]));
+  };
+};
+raw.pragma('foreign_keys = OFF'); // the copied context has circular references (current fit, revision)
+raw.transaction(() =>
+  Object.entries(context).forEach(([t, rows]) => rows.length && inserter(t, rows)()),
+)();
+raw.pragma('foreign_keys = ON');
+const timed = MEASURED.map((t) => inserter(t, measured[t]!));
 const rawStarted = performance.now();
-raw.transaction(() => {
-  for (const batch of batches) {
-    for (const { payload, recordedAt } of batch) {
-      const p = payload as {
-        id: string;
-        lotId: string;
-        sampleIndex: number;
-        measurements: object;
-        deviceVerdict: { conforming: boolean };
-      };
-      insert.run(
-        p.id,
-        p.lotId,
-        p.sampleIndex,
-        JSON.stringify(p.measurements),
-        JSON.stringify(p.deviceVerdict),
-        JSON.stringify(verdicts.get(p.id)),
-        p.deviceVerdict.conforming ? 1 : 0,
-        authorId,
-        deviceId,
-        recordedAt,
-        new Date().toISOString(),
-      );
-    }
-  }
-})();
+raw.transaction(() => timed.forEach((insert) => insert()))();
 const rawSeconds = (performance.now() - rawStarted) / 1000;
 raw.close();
 rmSync(dataDir, { recursive: true, force: true });
+const rowCount = MEASURED.map((t) => `${measured[t]!.length} ${t}`).join(', ');
 
 const apiRate = RECORDS / apiSeconds;
 const rawRate = RECORDS / rawSeconds;
 const row = (what: string, seconds: number, rate: number) =>
   `${what.padEnd(40)} ${seconds.toFixed(3).padStart(8)} s ${Math.round(rate).toString().padStart(10)} records/s`;
-console.log(
-  `sync push: ${RECORDS} inspection records, batches of ${BATCH}, spec ${nominal.geometry.shape}`,
-);
+console.log(`sync push: ${RECORDS} inspection records of GM-1040 in batches of ${BATCH} over HTTP`);
 console.log(row('HTTP push (validate, re-check, store)', apiSeconds, apiRate));
 console.log(row('raw better-sqlite3, one transaction', rawSeconds, rawRate));
+console.log(`  (raw: the same rows the push stored — ${rowCount})`);
 console.log(
   `ratio ${(apiRate / rawRate).toFixed(3)} (goal ≥ 0.2); HTTP goal ≥ 2 000 records/s: ${apiRate >= 2000 ? 'met' : 'not met'}`,
 );
