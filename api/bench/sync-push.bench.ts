@@ -164,10 +164,12 @@ const measured: Record<string, Row[]> = {
     .prepare(`SELECT * FROM inspections WHERE lotId IN (${lotList})`)
     .all() as Row[],
   applied_ops: stored
-    .prepare(`SELECT * FROM applied_ops WHERE type = 'inspection.record'`)
-    .all() as Row[],
+    .prepare(`SELECT * FROM applied_ops WHERE type = 'inspection.record' AND deviceId = ?`)
+    .all(deviceId) as Row[],
   audit_log: stored
-    .prepare(`SELECT * FROM audit_log WHERE action = 'inspection.record'`)
+    .prepare(
+      `SELECT * FROM audit_log WHERE entityId IN (SELECT id FROM inspections WHERE lotId IN (${lotList}))`,
+    )
     .all() as Row[],
 };
 const context = Object.fromEntries(
