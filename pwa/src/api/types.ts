@@ -2,7 +2,7 @@
  * Shapes the plant server sends and accepts, as listed in api/src/ROUTES.md and
  * api/src/sync/README.md. Lengths mm, forces N, hardness Shore A.
  */
-import type { MaterialModel } from '../engine/material-model';
+import type { MaterialModel, PartSpec } from '../engine/index';
 
 export type Role = 'inspector' | 'supervisor' | 'quality' | 'admin';
 
@@ -74,6 +74,8 @@ export interface SpecRevision {
   status: 'draft' | 'released';
   body: SpecBody;
   fit: Fit | null;
+  /** Frozen at release: the spec with the fit's constants, exactly as the server judges parts. */
+  partSpec?: PartSpec | null;
   derived: Record<string, unknown> | null;
   releasedAt: string | null;
   releasedBy: string | null;

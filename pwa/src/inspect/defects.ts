@@ -1,15 +1,15 @@
 import type { DefectLocation, DefectSeverity } from '../api/types';
 
-/** Visual defects of molded rubber in the trade's words (REFERENCES §11). */
+/** Visual defects of molded rubber in the trade's words (REFERENCES §11); values as the server takes them. */
 export const DEFECT_TYPES = [
   { value: 'flash', label: 'Flash' },
   { value: 'off-register', label: 'Off-register (mismatch)' },
   { value: 'backrind', label: 'Backrind' },
   { value: 'non-fill', label: 'Non-fill' },
-  { value: 'flow-lines', label: 'Flow lines' },
-  { value: 'knit-lines', label: 'Knit lines' },
-  { value: 'voids', label: 'Voids or porosity' },
-  { value: 'blisters', label: 'Blisters' },
+  { value: 'flow-line', label: 'Flow lines' },
+  { value: 'knit-line', label: 'Knit lines' },
+  { value: 'void', label: 'Voids or porosity' },
+  { value: 'blister', label: 'Blisters' },
   { value: 'contamination', label: 'Contamination or inclusion' },
   { value: 'mold-deposit', label: 'Mold deposit marks' },
   { value: 'trim-damage', label: 'Trim damage' },
@@ -17,7 +17,8 @@ export const DEFECT_TYPES = [
   { value: 'under-cure', label: 'Under-cure' },
   { value: 'over-cure', label: 'Over-cure' },
   { value: 'bond-failure', label: 'Bond failure' },
-  { value: 'ozone-cracks', label: 'Ozone cracks' },
+  { value: 'ozone-crack', label: 'Ozone cracks' },
+  { value: 'other', label: 'Other (say what in the note)' },
 ] as const;
 
 /** Classed by what the surface does in service, not by a fixed pass/fail. */

@@ -1,9 +1,26 @@
-import type { PartVerdict } from '../engine/index';
+import type { PartVerdict, VerdictStatus } from '../engine/index';
 
 /**
- * A part's verdict as stored with the record and sent as its `deviceVerdict`: the engine's
- * PartVerdict, exactly what the tablet showed. Read back defensively — it crossed JSON.
+ * What a record carries as its `deviceVerdict`: the status the tablet showed, overall and per
+ * characteristic. The reasons in words stay on the tablet; they follow from the measurements.
  */
+export interface WireVerdict {
+  status: VerdictStatus;
+  conforming: boolean;
+  characteristics: Record<string, VerdictStatus>;
+}
+
+export function toWireVerdict(verdict: PartVerdict): WireVerdict {
+  return {
+    status: verdict.status,
+    conforming: verdict.conforming,
+    characteristics: Object.fromEntries(
+      verdict.characteristics.map((c) => [c.characteristic, c.status]),
+    ),
+  };
+}
+
+/** The server's verdict of a record (the engine's PartVerdict), read back defensively. */
 export function asPartVerdict(
   stored: Record<string, unknown> | undefined,
 ): PartVerdict | undefined {

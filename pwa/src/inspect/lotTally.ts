@@ -1,6 +1,6 @@
 import type { DefectRecord, LotVerdict, PartVerdict, PreparedSpec } from '../engine/index';
 import type { LotPlan } from '../api/types';
-import type { LocalDefect, LocalPart } from '../offline/records';
+import type { LotRecords } from '../offline/catalog';
 import type { Engine } from './engine';
 
 export interface LotTally {
@@ -11,29 +11,29 @@ export interface LotTally {
   bad: Set<string>;
 }
 
-function defectsOn(partId: string, defects: LocalDefect[]): DefectRecord[] {
-  return defects
-    .filter((defect) => defect.partId === partId)
+/** A defect belongs to its sample, whichever revision of the part record it was logged on. */
+function defectsOn(sampleIndex: number, records: LotRecords): DefectRecord[] {
+  return records.defects
+    .filter((defect) => defect.partId && records.sampleOf.get(defect.partId) === sampleIndex)
     .map(({ type, location, severity, sizeMm }) => ({ type, location, severity, sizeMm }));
 }
 
 /**
- * The lot as the engine judges it from this tablet's records. A part's verdict is worked out
- * again here because a defect may be logged after its measurements were saved.
+ * The lot as the engine judges it from this tablet's records, the way the server recounts it:
+ * a part's verdict is worked out again with the defects logged on its sample since.
  */
 export function lotTally(
   engine: Engine,
   prepared: PreparedSpec,
   plan: LotPlan,
-  parts: LocalPart[],
-  defects: LocalDefect[],
+  records: LotRecords,
 ): LotTally {
   const verdicts = new Map(
-    parts.slice(0, plan.sampleSize).map((part) => [
+    records.parts.slice(0, plan.sampleSize).map((part) => [
       part.id,
       engine.partVerdict(prepared, {
         ...part.measurements,
-        defects: defectsOn(part.id, defects),
+        defects: defectsOn(part.sampleIndex, records),
       }),
     ]),
   );

@@ -13,7 +13,7 @@ export interface PreparedState {
 
 /** The engine and the spec worked out once for every part of a lot. */
 export function usePreparedSpec(
-  revision: Pick<SpecRevision, 'body' | 'fit'> | undefined,
+  revision: Pick<SpecRevision, 'body' | 'fit' | 'partSpec'> | undefined,
 ): PreparedState {
   const engine = useEngine();
   return useMemo(() => {

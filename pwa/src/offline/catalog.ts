@@ -88,13 +88,15 @@ export interface LotRecords {
   /** Current parts only: a corrected part is replaced by its correction. */
   parts: LocalPart[];
   defects: LocalDefect[];
+  /** The sample number of every part record, corrected ones too (defects may point at those). */
+  sampleOf: Map<string, number>;
   /** The sync operation of each record, by record id, to show what is still waiting. */
   ops: Map<string, OutboxOp>;
 }
 
 export function useLotRecords(lotId: string | undefined): LotRecords | undefined {
   return useLiveQuery(async () => {
-    if (!lotId) return { parts: [], defects: [], ops: new Map() };
+    if (!lotId) return { parts: [], defects: [], sampleOf: new Map(), ops: new Map() };
     const [parts, defects] = await Promise.all([
       db.parts.where('lotId').equals(lotId).toArray(),
       db.defects.where('lotId').equals(lotId).toArray(),
@@ -107,6 +109,7 @@ export function useLotRecords(lotId: string | undefined): LotRecords | undefined
         .filter((part) => !replaced.has(part.id))
         .sort((a, b) => a.sampleIndex - b.sampleIndex),
       defects: defects.sort((a, b) => a.recordedAt.localeCompare(b.recordedAt)),
+      sampleOf: new Map(parts.map((part) => [part.id, part.sampleIndex])),
       ops: new Map(ops.map((op) => [op.recordId, op])),
     };
   }, [lotId]);

@@ -9,6 +9,8 @@ import type {
   LotVerdict,
   Measurements,
 } from '../api/types';
+import type { PartVerdict } from '../engine/index';
+import { toWireVerdict } from '../inspect/deviceVerdict';
 import { db, type StoredPhoto } from './db';
 import { enqueue } from './outbox';
 
@@ -35,8 +37,8 @@ export interface LocalPart {
   sampleIndex: number;
   supersedes?: string;
   measurements: Measurements;
-  /** What the tablet showed, sent as the record's deviceVerdict. */
-  verdict: Record<string, unknown>;
+  /** The engine's verdict as the tablet showed it; its statuses go out as the deviceVerdict. */
+  verdict: PartVerdict;
   conforming: boolean;
   authorId: string;
   recordedAt: string;
@@ -99,7 +101,14 @@ export async function recordPart(input: NewPart, authorId: string): Promise<Loca
     const { id, lotId, sampleIndex, supersedes, measurements, verdict } = part;
     await enqueue({
       type: 'inspection.record',
-      payload: { id, lotId, sampleIndex, supersedes, measurements, deviceVerdict: verdict },
+      payload: {
+        id,
+        lotId,
+        sampleIndex,
+        supersedes,
+        measurements,
+        deviceVerdict: toWireVerdict(verdict),
+      },
       authorId,
       recordId: id,
     });

@@ -14,8 +14,8 @@ function Thumbnail({ sha256 }: { sha256: string }) {
 }
 
 function partName(defect: LocalDefect, records: LotRecords): string {
-  const part = records.parts.find((p) => p.id === defect.partId);
-  return part ? `part ${part.sampleIndex}` : 'not on a sampled part';
+  const sample = defect.partId ? records.sampleOf.get(defect.partId) : undefined;
+  return sample === undefined ? 'not on a sampled part' : `part ${sample}`;
 }
 
 export function DefectList({ records }: { records: LotRecords }) {

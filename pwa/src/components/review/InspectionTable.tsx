@@ -1,4 +1,5 @@
 import type { Inspection } from '../../api/types';
+import type { VerdictStatus } from '../../engine/index';
 import { asPartVerdict } from '../../inspect/deviceVerdict';
 import { formatHardness, formatQuantity } from '../../inspect/units';
 import type { UnitSystem } from '../../offline/db';
@@ -23,17 +24,18 @@ export function InspectionTable({
           <th>Thickness</th>
           <th>Hardness</th>
           <th>Load</th>
-          <th>Tablet said</th>
-          <th>Server counts it</th>
+          <th>Server's verdict</th>
+          <th>Tablet showed</th>
           <th>Recorded</th>
         </tr>
       </thead>
       <tbody>
         {current.map((inspection) => {
-          const shown = asPartVerdict(inspection.deviceVerdict);
-          const reasons = shown?.characteristics
+          const judged = asPartVerdict(inspection.serverVerdict);
+          const reasons = judged?.characteristics
             .filter((c) => c.status !== 'within')
             .map((c) => c.reason);
+          const shown = inspection.deviceVerdict.status as VerdictStatus | undefined;
           return (
             <tr key={inspection.id}>
               <td>
@@ -44,14 +46,15 @@ export function InspectionTable({
               <td>{formatHardness(inspection.measurements.hardness)}</td>
               <td>{formatQuantity(inspection.measurements.load, 'force', units)}</td>
               <td>
-                {shown && <StandingBadge standing={shown.status} />}
+                {judged && <StandingBadge standing={judged.status} />}{' '}
+                {inspection.conforming ? 'good' : <strong>bad</strong>}
                 {reasons?.map((reason) => (
                   <div key={reason} className="reason">
                     {reason}
                   </div>
                 ))}
               </td>
-              <td>{inspection.conforming ? 'good' : <strong>bad</strong>}</td>
+              <td>{shown && <StandingBadge standing={shown} />}</td>
               <td>{new Date(inspection.recordedAt).toLocaleString()}</td>
             </tr>
           );

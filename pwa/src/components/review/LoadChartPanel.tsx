@@ -8,7 +8,7 @@ import { toPartSpec } from '../../inspect/partSpec';
 const LoadChart = lazy(async () => ({ default: (await import('./LoadChart')).LoadChart }));
 
 interface LoadChartPanelProps {
-  revision: Pick<SpecRevision, 'body' | 'fit'> | undefined;
+  revision: Pick<SpecRevision, 'body' | 'fit' | 'partSpec'> | undefined;
   inspections: Inspection[];
 }
 

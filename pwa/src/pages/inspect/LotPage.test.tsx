@@ -17,7 +17,7 @@ async function recordPadPart(sampleIndex: number, loadFactor: number) {
       lotId: PAD_LOT.id,
       sampleIndex,
       measurements,
-      verdict: verdict as unknown as Record<string, unknown>,
+      verdict,
       conforming: verdict.conforming,
     },
     'u-ines',

@@ -39,10 +39,7 @@ export function LotPage() {
       </Screen>
     );
 
-  const tally =
-    engine && prepared
-      ? lotTally(engine, prepared, lot.plan, records.parts, records.defects)
-      : undefined;
+  const tally = engine && prepared ? lotTally(engine, prepared, lot.plan, records) : undefined;
   const decision = tally?.lot.decision;
   const open = lot.status === 'open';
   const next = records.parts.length + 1;

@@ -97,7 +97,7 @@ function PartEntry({
           sampleIndex,
           supersedes: correcting?.id,
           measurements: read.measurements,
-          verdict: verdict as unknown as Record<string, unknown>,
+          verdict,
           conforming: verdict.conforming,
         },
         person.userId,
@@ -148,7 +148,11 @@ export function PartPage() {
   const [saved, setSaved] = useState<LocalPart>();
 
   const correcting = records?.parts.find((part) => part.id === search.get('correct'));
-  const sampleIndex = correcting?.sampleIndex ?? (records?.parts.length ?? 0) + 1;
+  // The next part follows the one just saved at once, not when the device store's live query
+  // catches up: a remount a moment later would throw away what is being typed.
+  const sampleIndex =
+    correcting?.sampleIndex ??
+    Math.max((records?.parts.length ?? 0) + 1, saved ? saved.sampleIndex + 1 : 1);
   const ready = lot && spec && records && engine && prepared && person;
   const title = lot
     ? `Lot ${lot.lotNumber} · part ${sampleIndex} of ${lot.plan.sampleSize}`
@@ -167,9 +171,7 @@ export function PartPage() {
       {saved && (
         <p className="saved-note" data-testid="saved-note">
           Part {saved.sampleIndex} saved on this tablet{' '}
-          {saved.verdict.status ? (
-            <StandingBadge standing={(saved.verdict as unknown as PartVerdict).status} />
-          ) : null}
+          <StandingBadge standing={saved.verdict.status} />
           <IonButton fill="clear" routerLink={`/lots/${lotId}/defect?part=${saved.id}`}>
             Log a defect on it
           </IonButton>
