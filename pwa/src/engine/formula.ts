@@ -165,6 +165,15 @@ function translated(energy: string): Translation {
   return translation;
 }
 
+/** Throws EngineInputError unless the energy parses and every name in it has a value. */
+export function requireFormula(energy: string, constants: Readonly<Record<string, unknown>>): void {
+  const unknown = [...translated(energy).symbols].filter(
+    (name) => !(name in constants) && !(name in NAMED_NUMBERS),
+  );
+  if (unknown.length > 0)
+    throw new EngineInputError('energy', `unknown names: ${unknown.join(', ')}`);
+}
+
 /** W(I1, I2) of a formula model, evaluated in T. */
 export function formulaEnergy<T extends Scalar<T>>(
   energy: string,

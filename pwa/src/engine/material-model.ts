@@ -1,5 +1,5 @@
 import { EngineInputError } from './errors.js';
-import { checkFormula } from './formula.js';
+import { requireFormula } from './formula.js';
 import { realPart } from './scalar.js';
 
 /** The three standard tests (REFERENCES §2). */
@@ -113,14 +113,9 @@ export function checkModel<C extends { re: number; isFinite(): boolean } | numbe
         throw new EngineInputError('n', `must be above 1, got ${realPart(model.n)}`);
       }
       return;
-    case 'formula': {
-      const check = checkFormula(model.energy, Object.keys(model.constants));
-      if (check.error) throw new EngineInputError('energy', check.error.message);
-      if (check.unknownSymbols.length > 0) {
-        throw new EngineInputError('energy', `unknown names: ${check.unknownSymbols.join(', ')}`);
-      }
+    case 'formula':
+      requireFormula(model.energy, model.constants);
       return;
-    }
     case 'neo-hookean':
     case 'mooney-rivlin':
     case 'yeoh':

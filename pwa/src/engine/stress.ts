@@ -46,16 +46,26 @@ export function uncheckedStress<T extends Liftable<T>>(
     .mul(STRESS_FACTOR[mode]);
 }
 
+/** True when every constant is a plain number: such a model needs no lifting at all. */
+function hasOnlyNumbers(value: unknown): boolean {
+  if (typeof value !== 'object' || value === null) return true;
+  if ('constant' in value) return false;
+  return Object.values(value).every(hasOnlyNumbers);
+}
+
 /**
- * The model with its scalar constants brought into the lifted type (numbers stay numbers),
- * kept per model object: a fit or a load curve evaluates one model at many stretches.
+ * Models with scalar constants (fit Jacobians, sensitivities) are built for one evaluation pass
+ * and then read at many stretches, so their lifted copy is kept per model object; models are
+ * values and are never changed in place.
  */
 const liftedModels = new WeakMap<object, { lift: unknown; model: unknown }>();
 
+/** The model with its scalar constants brought into the lifted type; numbers stay numbers. */
 function liftedModel<T, U>(
   model: ModelOf<T | number>,
   lift: (value: T | number) => U,
 ): ModelOf<U | number> {
+  if (hasOnlyNumbers(model)) return model as ModelOf<number>;
   const cached = liftedModels.get(model);
   // Each scalar type lifts through one fixed function, so the same lift means the same U.
   if (cached?.lift === lift) return cached.model as ModelOf<U | number>;
