@@ -202,8 +202,9 @@ function fitComparison(): void {
     const judged = solvers.slice(1).map(([solver], k) => {
       const ratio = best[k + 1]! / best[0]!;
       const costOk = costs[0]! <= costs[k + 1]! * (1 + 1e-9);
-      const goal = ratio >= 3 && costOk ? 'goal met' : 'goal NOT met';
-      return `${ratio.toFixed(1)}× vs ${solver.replace('ml-levenberg-marquardt, ', '')} (cost ${costOk ? 'equal or lower' : 'HIGHER'}: ${goal})`;
+      const goal = ratio >= 3 && costOk ? 'met' : 'not met';
+      const label = solver.replace('ml-levenberg-marquardt, ', '');
+      return `${ratio.toFixed(1)}× vs ${label}, cost ${costOk ? 'equal or lower' : 'HIGHER'}, goal ≥ 3× ${goal}`;
     });
     verdicts.push(`    ${name}: ours ${judged.join('; ')}`);
   }
