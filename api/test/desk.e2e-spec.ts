@@ -195,3 +195,20 @@ test('every write is audited with before and after; admins and quality read it',
   });
   expect(JSON.stringify(log.body)).not.toMatch(/passwordHash/);
 });
+
+test('a duplicate key is a 409 naming the field, not a 500', async () => {
+  const admin = as((await signIn(h, 'admin@demo.test')).accessToken);
+  const press = await admin
+    .post('/api/presses', { code: 'P1', name: 'Again', kind: 'compression' })
+    .expect(409);
+  expect(press.body).toMatchObject({ statusCode: 409, field: 'code' });
+  const user = await admin
+    .post('/api/users', {
+      email: 'quality@demo.test',
+      name: 'Twin',
+      role: 'quality',
+      password: 'long-enough-4',
+    })
+    .expect(409);
+  expect(user.body.field).toBe('email');
+});

@@ -24,3 +24,21 @@ export const Finite = (min: number, max: number, each = false) =>
 
 export const WholeNumber = (min: number, max: number) =>
   applyDecorators(IsInt(), Min(min), Max(max));
+
+/** Like Finite, but the lower end is excluded (and the upper too when `openMax`). */
+export const FiniteAbove = (min: number, max: number, openMax = false) =>
+  ValidateBy({
+    name: 'finiteAbove',
+    constraints: [min, max],
+    validator: {
+      validate: (value: unknown) =>
+        typeof value === 'number' &&
+        Number.isFinite(value) &&
+        value > min &&
+        (openMax ? value < max : value <= max),
+      defaultMessage: buildMessage(
+        (prefix) =>
+          `${prefix}$property must be a finite number above ${min} and ${openMax ? 'below' : 'up to'} ${max}`,
+      ),
+    },
+  });

@@ -3,6 +3,7 @@ import type { DataSourceOptions } from 'typeorm';
 import { AuditEntry } from '../audit/entities/audit-entry.entity.js';
 import { RefreshToken } from '../auth/entities/refresh-token.entity.js';
 import { Session } from '../auth/entities/session.entity.js';
+import { AgingSet } from '../compounds/entities/aging-set.entity.js';
 import { CompoundFit } from '../compounds/entities/compound-fit.entity.js';
 import { Compound } from '../compounds/entities/compound.entity.js';
 import { TestSet } from '../compounds/entities/test-set.entity.js';
@@ -19,6 +20,7 @@ import { AppliedOp } from '../sync/entities/applied-op.entity.js';
 import { Change } from '../changes/entities/change.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import { Initial1764600000000 } from './migrations/1764600000000-initial.js';
+import { DeskFields1764700000000 } from './migrations/1764700000000-desk-fields.js';
 
 export const ENTITIES = [
   User,
@@ -28,6 +30,7 @@ export const ENTITIES = [
   Compound,
   TestSet,
   CompoundFit,
+  AgingSet,
   Spec,
   SpecRevision,
   Lot,
@@ -41,7 +44,7 @@ export const ENTITIES = [
   OutgoingMail,
 ];
 
-export const MIGRATIONS = [Initial1764600000000];
+export const MIGRATIONS = [Initial1764600000000, DeskFields1764700000000];
 
 export function databaseFile(dataDir: string): string {
   return join(dataDir, 'gumshoe.sqlite');

@@ -2,7 +2,6 @@ import { randomUUID } from 'node:crypto';
 import {
   Inject,
   Injectable,
-  Logger,
   Module,
   type INestApplicationContext,
   type OnApplicationBootstrap,
@@ -58,8 +57,6 @@ type Trouble = 'none' | 'soft-cure' | 'thin-parts';
  */
 @Injectable()
 export class DemoSeed implements OnApplicationBootstrap {
-  private readonly logger = new Logger('Seed');
-
   constructor(
     @Inject(CONFIG) private readonly config: Config,
     private readonly dataSource: DataSource,
@@ -95,7 +92,6 @@ export class DemoSeed implements OnApplicationBootstrap {
       await this.week(manager, people, presses, revisions);
     });
     await this.mail.flush();
-    this.logger.log('Demo plant seeded');
   }
 
   /** Each compound with its test data, fitted by the engine and published. */

@@ -9,11 +9,11 @@ import {
   type OnModuleDestroy,
   type OnModuleInit,
 } from '@nestjs/common';
-import { InjectRepository } from '@nestjs/typeorm';
 import { simpleParser } from 'mailparser';
 import nodemailer, { type Transporter } from 'nodemailer';
-import { IsNull, LessThan, Repository, type EntityManager } from 'typeorm';
+import { IsNull, LessThan, type EntityManager } from 'typeorm';
 import { CONFIG, type Config } from '../config.js';
+import { Transactions } from '../database/transactions.js';
 import { OutgoingMail } from './entities/outgoing-mail.entity.js';
 import { FakeSmtp } from './fake-smtp.js';
 
@@ -42,7 +42,7 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
 
   constructor(
     @Inject(CONFIG) private readonly config: Config,
-    @InjectRepository(OutgoingMail) private readonly outbox: Repository<OutgoingMail>,
+    private readonly transactions: Transactions,
   ) {}
 
   async onModuleInit(): Promise<void> {
@@ -100,10 +100,14 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
   }
 
   private async sendPending(): Promise<void> {
-    const pending = await this.outbox.find({
-      where: { sentAt: IsNull(), attempts: LessThan(MAX_ATTEMPTS) },
-      order: { createdAt: 'ASC' },
-    });
+    // Read and marked in the writers' queue: on the shared connection a plain read could see the
+    // mail of a transaction that has not committed (and may yet roll back).
+    const pending = await this.transactions.run((manager) =>
+      manager.find(OutgoingMail, {
+        where: { sentAt: IsNull(), attempts: LessThan(MAX_ATTEMPTS) },
+        order: { createdAt: 'ASC' },
+      }),
+    );
     for (const mail of pending) {
       try {
         await this.transport?.sendMail({
@@ -112,14 +116,17 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
           subject: mail.subject,
           text: mail.text,
         });
-        await this.outbox.update(
-          { id: mail.id },
-          { sentAt: new Date(), attempts: mail.attempts + 1 },
+        const sent = { sentAt: new Date(), attempts: mail.attempts + 1 };
+        await this.transactions.run((manager) =>
+          manager.update(OutgoingMail, { id: mail.id }, sent),
         );
       } catch (error) {
         const lastError = String((error as Error).message).slice(0, 500);
         this.logger.warn(`Could not send "${mail.subject}": ${lastError}`);
-        await this.outbox.update({ id: mail.id }, { attempts: mail.attempts + 1, lastError });
+        const failed = { attempts: mail.attempts + 1, lastError };
+        await this.transactions.run((manager) =>
+          manager.update(OutgoingMail, { id: mail.id }, failed),
+        );
       }
     }
   }

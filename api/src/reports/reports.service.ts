@@ -8,6 +8,7 @@ import { Lot } from '../lots/entities/lot.entity.js';
 import { LotsService } from '../lots/lots.service.js';
 import { Press } from '../presses/entities/press.entity.js';
 import type { SpecDerived } from '../specs/engine-spec.js';
+import { Spec } from '../specs/entities/spec.entity.js';
 import { SpecsService } from '../specs/specs.service.js';
 import { User } from '../users/entities/user.entity.js';
 
@@ -95,7 +96,7 @@ export class ReportsService {
     if (!lot) throw new NotFoundException(`No lot ${lotId}`);
     const { revision } = await this.specs.judged(manager, lot.specRevisionId);
     const [spec, press, compound, parts, dispositions] = await Promise.all([
-      this.specs.get(lot.specId),
+      manager.findOneByOrFail(Spec, { id: lot.specId }),
       manager.findOneByOrFail(Press, { id: lot.pressId }),
       manager.findOneByOrFail(Compound, { id: revision.compoundId }),
       this.lots.judgeParts(manager, lot),

@@ -12,7 +12,7 @@ import {
   ValidateNested,
   IsObject,
 } from 'class-validator';
-import { Finite } from '../../common/numbers.js';
+import { Finite, FiniteAbove } from '../../common/numbers.js';
 import { MODES, type Mode } from '../../engine.js';
 import { POLYMERS, type Polymer } from '../entities/compound.entity.js';
 import { MODEL_TYPES, ModelDto, type ModelBody } from './model.dto.js';
@@ -40,6 +40,36 @@ export class CreateCompoundDto {
   @Optional()
   @Finite(100, 10_000)
   bulkModulusMPa?: number;
+
+  @Optional()
+  @IsString()
+  @Length(0, 2000)
+  notes?: string;
+}
+
+/** Everything but the code, which identifies the compound on drawings and labels. */
+export class UpdateCompoundDto {
+  @Optional()
+  @IsString()
+  @Length(1, 120)
+  name?: string;
+
+  @Optional()
+  @IsIn(POLYMERS)
+  polymer?: Polymer;
+
+  @Optional()
+  @Finite(10, 95)
+  hardnessShoreA?: number;
+
+  @Optional()
+  @Finite(100, 10_000)
+  bulkModulusMPa?: number;
+
+  @Optional()
+  @IsString()
+  @Length(0, 2000)
+  notes?: string;
 }
 
 export class StressPointDto {
@@ -72,6 +102,21 @@ export class CreateTestSetDto {
   points: StressPointDto[];
 }
 
+/** Weight of each mode's squared residuals in the fit; modes left out weigh 1. */
+export class FitWeightsDto {
+  @Optional()
+  @FiniteAbove(0, 1000)
+  uniaxial?: number;
+
+  @Optional()
+  @FiniteAbove(0, 1000)
+  equibiaxial?: number;
+
+  @Optional()
+  @FiniteAbove(0, 1000)
+  planar?: number;
+}
+
 export class CreateFitDto {
   /** The starting point; the fit comes back in the same shape. */
   @IsObject()
@@ -88,4 +133,18 @@ export class CreateFitDto {
 
   @IsIn(['absolute', 'relative'])
   objective: 'absolute' | 'relative';
+
+  @Optional()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => FitWeightsDto)
+  weights?: FitWeightsDto;
+}
+
+export class PublishFitDto {
+  /** What the new constants are for; optional so that scripted publishing keeps working. */
+  @Optional()
+  @IsString()
+  @Length(1, 1000)
+  note?: string;
 }

@@ -1,5 +1,5 @@
 import { Column, Entity, Index, ManyToOne, PrimaryColumn, type Relation } from 'typeorm';
-import type { MaterialModel } from '../../engine.js';
+import type { MaterialModel, Mode } from '../../engine.js';
 import { Compound } from './compound.entity.js';
 
 export type FitStatus = 'draft' | 'published';
@@ -30,6 +30,10 @@ export class CompoundFit {
   @Column({ type: 'simple-json' })
   testSetIds: string[];
 
+  /** Weight of each mode's squared residuals as given to the engine; null: all weigh 1. */
+  @Column({ type: 'simple-json', nullable: true })
+  weights: Partial<Record<Mode, number>> | null;
+
   /** What the engine reported besides the model: RMS and R² per mode, iterations, stability. */
   @Column({ type: 'simple-json' })
   result: object;
@@ -45,4 +49,11 @@ export class CompoundFit {
 
   @Column({ type: Date, nullable: true })
   publishedAt: Date | null;
+
+  @Column({ type: 'varchar', length: 36, nullable: true })
+  publishedBy: string | null;
+
+  /** Why it was published, as the quality engineer wrote it. */
+  @Column({ type: 'varchar', length: 1000, nullable: true })
+  note: string | null;
 }

@@ -25,6 +25,10 @@ export class Compound {
   @Column({ type: 'double precision', nullable: true })
   bulkModulusMPa: number | null;
 
+  /** The quality engineer's free text about the compound. */
+  @Column({ type: 'varchar', length: 2000, default: '' })
+  notes: string;
+
   /** The published fit whose constants part specs pick up when they are released. */
   @Column({ type: 'varchar', length: 36, nullable: true })
   currentFitId: string | null;
