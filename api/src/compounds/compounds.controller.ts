@@ -1,9 +1,18 @@
-import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
 import { AnyRole, Roles, type AuthUser } from '../auth/access.js';
 import { CurrentUser } from '../auth/current-user.decorator.js';
 import { uuidParam } from '../common/id-param.js';
+import { AgingService } from './aging.service.js';
 import { CompoundsService, type CompoundDetail } from './compounds.service.js';
-import { CreateCompoundDto, CreateFitDto, CreateTestSetDto } from './dto/compound.dto.js';
+import { CreateAgingSetDto } from './dto/aging.dto.js';
+import {
+  CreateCompoundDto,
+  CreateFitDto,
+  CreateTestSetDto,
+  PublishFitDto,
+  UpdateCompoundDto,
+} from './dto/compound.dto.js';
+import type { AgingSet } from './entities/aging-set.entity.js';
 import type { CompoundFit } from './entities/compound-fit.entity.js';
 import type { Compound } from './entities/compound.entity.js';
 import type { TestSet } from './entities/test-set.entity.js';
@@ -14,6 +23,7 @@ export class CompoundsController {
   constructor(
     private readonly compounds: CompoundsService,
     private readonly fits: FitsService,
+    private readonly aging: AgingService,
   ) {}
 
   @Get()
@@ -32,6 +42,16 @@ export class CompoundsController {
   @Roles('quality')
   create(@CurrentUser() actor: AuthUser, @Body() body: CreateCompoundDto): Promise<Compound> {
     return this.compounds.create(actor.id, body);
+  }
+
+  @Patch(':id')
+  @Roles('quality')
+  update(
+    @CurrentUser() actor: AuthUser,
+    @Param('id', uuidParam) id: string,
+    @Body() body: UpdateCompoundDto,
+  ): Promise<Compound> {
+    return this.compounds.update(actor.id, id, body);
   }
 
   @Post(':id/test-sets')
@@ -61,7 +81,24 @@ export class CompoundsController {
     @CurrentUser() actor: AuthUser,
     @Param('id', uuidParam) id: string,
     @Param('fitId', uuidParam) fitId: string,
+    @Body() body: PublishFitDto,
   ): Promise<Compound> {
-    return this.compounds.publish(actor.id, id, fitId);
+    return this.compounds.publish(actor.id, id, fitId, body.note);
+  }
+
+  @Get(':id/aging')
+  @AnyRole()
+  listAging(@Param('id', uuidParam) id: string): Promise<AgingSet[]> {
+    return this.aging.list(id);
+  }
+
+  @Post(':id/aging')
+  @Roles('quality')
+  addAging(
+    @CurrentUser() actor: AuthUser,
+    @Param('id', uuidParam) id: string,
+    @Body() body: CreateAgingSetDto,
+  ): Promise<AgingSet> {
+    return this.aging.add(actor.id, id, body);
   }
 }

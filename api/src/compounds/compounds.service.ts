@@ -5,7 +5,7 @@ import { Repository, type EntityManager } from 'typeorm';
 import { AuditService } from '../audit/audit.service.js';
 import { ChangeFeed } from '../changes/change-feed.service.js';
 import { Transactions } from '../database/transactions.js';
-import type { CreateCompoundDto, CreateTestSetDto } from './dto/compound.dto.js';
+import type { CreateCompoundDto, CreateTestSetDto, UpdateCompoundDto } from './dto/compound.dto.js';
 import { CompoundFit } from './entities/compound-fit.entity.js';
 import { Compound } from './entities/compound.entity.js';
 import { TestSet } from './entities/test-set.entity.js';
@@ -49,6 +49,7 @@ export class CompoundsService {
       const compound: Compound = {
         id: randomUUID(),
         bulkModulusMPa: null,
+        notes: '',
         ...dto,
         currentFitId: null,
         createdAt: new Date(),
@@ -65,6 +66,23 @@ export class CompoundsService {
       );
       await this.publishCompound(manager, compound.id);
       return compound;
+    });
+  }
+
+  /** Later releases pick up a changed K; released revisions keep the one they froze. */
+  update(actorId: string, id: string, dto: UpdateCompoundDto): Promise<Compound> {
+    return this.transactions.run(async (manager) => {
+      const before = await this.mustExist(manager, id);
+      const changes = Object.fromEntries(
+        Object.entries(dto).filter(([, value]) => value !== undefined),
+      ) as UpdateCompoundDto;
+      if (Object.keys(changes).length === 0) return this.withFit(manager, id);
+      await manager.update(Compound, { id }, changes);
+      await this.audit.record(manager, actorId, 'compound.update', 'compound', id, before, {
+        ...before,
+        ...changes,
+      });
+      return this.publishCompound(manager, id);
     });
   }
 
@@ -93,7 +111,7 @@ export class CompoundsService {
   }
 
   /** Makes a fit the compound's current constants; specs released from now on use it. */
-  publish(actorId: string, compoundId: string, fitId: string): Promise<Compound> {
+  publish(actorId: string, compoundId: string, fitId: string, note?: string): Promise<Compound> {
     return this.transactions.run(async (manager) => {
       const before = await this.mustExist(manager, compoundId);
       const fit = await manager.findOneBy(CompoundFit, { id: fitId, compoundId });
@@ -101,8 +119,19 @@ export class CompoundsService {
       if (fit.status === 'published' && before.currentFitId === fit.id) {
         throw new ConflictException('This fit is already the current one');
       }
-      const publishedAt = fit.publishedAt ?? new Date();
-      await manager.update(CompoundFit, { id: fit.id }, { status: 'published', publishedAt });
+      const published: CompoundFit = {
+        ...fit,
+        status: 'published',
+        publishedAt: fit.publishedAt ?? new Date(),
+        publishedBy: fit.publishedBy ?? actorId,
+        note: note ?? fit.note,
+      };
+      const { status, publishedAt, publishedBy } = published;
+      await manager.update(
+        CompoundFit,
+        { id: fit.id },
+        { status, publishedAt, publishedBy, note: published.note },
+      );
       await manager.update(Compound, { id: compoundId }, { currentFitId: fit.id });
       await this.audit.record(
         manager,
@@ -114,9 +143,10 @@ export class CompoundsService {
         {
           ...before,
           currentFitId: fit.id,
+          note: published.note,
         },
       );
-      await this.feed.publish(manager, 'fit', fit.id, { ...fit, status: 'published', publishedAt });
+      await this.feed.publish(manager, 'fit', fit.id, published);
       return this.publishCompound(manager, compoundId);
     });
   }
@@ -129,11 +159,12 @@ export class CompoundsService {
 
   /** Tablets get the compound with its current fit embedded, as the list shows it. */
   private async publishCompound(manager: EntityManager, id: string): Promise<Compound> {
-    const compound = await manager.findOneOrFail(Compound, {
-      where: { id },
-      relations: { currentFit: true },
-    });
+    const compound = await this.withFit(manager, id);
     await this.feed.publish(manager, 'compound', id, compound);
     return compound;
+  }
+
+  private withFit(manager: EntityManager, id: string): Promise<Compound> {
+    return manager.findOneOrFail(Compound, { where: { id }, relations: { currentFit: true } });
   }
 }

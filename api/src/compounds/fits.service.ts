@@ -34,10 +34,12 @@ export class FitsService {
       ]);
     }
     const data = sets.flatMap((set) => set.points.map((point) => ({ mode: set.mode, ...point })));
+    const weights = dto.weights ? { ...dto.weights } : null;
     const { model, ...result } = fitModel({
       model: dto.model as MaterialModel,
       data,
       objective: dto.objective,
+      ...(weights && { weights }),
     });
     return this.transactions.run(async (manager) => {
       const last = (await manager.maximum(CompoundFit, 'version', { compoundId })) ?? 0;
@@ -48,11 +50,14 @@ export class FitsService {
         model,
         objective: dto.objective,
         testSetIds: dto.testSetIds,
+        weights,
         result,
         status: 'draft',
         createdBy: actorId,
         createdAt: new Date(),
         publishedAt: null,
+        publishedBy: null,
+        note: null,
       };
       await manager.insert(CompoundFit, fit);
       await this.audit.record(manager, actorId, 'compound.fit', 'compound', compoundId, null, {

@@ -18,6 +18,17 @@ export interface SpecDerived {
   windows: AcceptanceWindows;
 }
 
+/**
+ * A released body carries the compound's measured K: tablets build their PartSpec by spreading
+ * the body, so they then judge with the same K as the server.
+ */
+export function frozenBody(
+  body: SpecBody,
+  bulkModulusMPa: number | null,
+): SpecBody & { bulkModulusMPa?: number } {
+  return bulkModulusMPa === null ? body : { ...body, bulkModulusMPa };
+}
+
 /** The revision as the engine judges parts against it: the body with the compound's constants. */
 export function engineSpec(
   body: SpecBody,

@@ -13,7 +13,7 @@ import type { SpecBody } from './dto/spec-body.dto.js';
 import type { CreateSpecDto } from './dto/spec.dto.js';
 import { Spec } from './entities/spec.entity.js';
 import { SpecRevision } from './entities/spec-revision.entity.js';
-import { engineSpec, specDerived } from './engine-spec.js';
+import { engineSpec, frozenBody, specDerived } from './engine-spec.js';
 
 export type SpecDetail = Spec & { revisions: SpecRevision[] };
 
@@ -134,9 +134,11 @@ export class SpecsService {
         );
       }
       const fit = await manager.findOneByOrFail(CompoundFit, { id: compound.currentFitId });
-      const partSpec = engineSpec(before.body, fit.model, compound.bulkModulusMPa);
+      const body = frozenBody(before.body, compound.bulkModulusMPa);
+      const partSpec = engineSpec(body, fit.model, compound.bulkModulusMPa);
       const after: SpecRevision = {
         ...before,
+        body,
         status: 'released',
         fitId: fit.id,
         partSpec,
@@ -148,6 +150,7 @@ export class SpecsService {
         SpecRevision,
         { id: revisionId },
         {
+          body: after.body,
           status: after.status,
           fitId: after.fitId,
           partSpec: after.partSpec,

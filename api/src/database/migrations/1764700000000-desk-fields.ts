@@ -30,7 +30,11 @@ export class DeskFields1764700000000 implements MigrationInterface {
           { name: 'createdAt', type: timestamp },
         ],
         foreignKeys: [
-          { columnNames: ['compoundId'], referencedTableName: 'compounds', referencedColumnNames: ['id'] },
+          {
+            columnNames: ['compoundId'],
+            referencedTableName: 'compounds',
+            referencedColumnNames: ['id'],
+          },
         ],
       }),
     );

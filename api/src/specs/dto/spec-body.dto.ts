@@ -1,6 +1,14 @@
 import { Type } from 'class-transformer';
-import { IsBoolean, IsIn, IsUUID, ValidateNested, IsObject } from 'class-validator';
-import { Finite } from '../../common/numbers.js';
+import {
+  IsBoolean,
+  IsIn,
+  IsObject,
+  IsString,
+  IsUUID,
+  Length,
+  ValidateNested,
+} from 'class-validator';
+import { Finite, FiniteAbove } from '../../common/numbers.js';
 import { PREFERRED_AQLS } from '../../engine.js';
 import { GEOMETRY_TYPES, GeometryDto, type Geometry } from './geometry.dto.js';
 import { Optional } from '../../common/optional.js';
@@ -98,6 +106,15 @@ export class HardnessSpecDto {
   tolerance: number;
 }
 
+/** The test condition the compression-set limit is stated at, e.g. 70 °C for 22 h. */
+export class CompressionSetConditionDto {
+  @Finite(-100, 400)
+  temperatureC: number;
+
+  @FiniteAbove(0, 100_000)
+  hours: number;
+}
+
 export class SamplingDto {
   @IsIn(LEVELS)
   level: (typeof LEVELS)[number];
@@ -149,6 +166,12 @@ export class SpecBody {
   @Finite(1, 100)
   compressionSetLimitPercent?: number;
 
+  @Optional()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => CompressionSetConditionDto)
+  compressionSetCondition?: CompressionSetConditionDto;
+
   @IsObject()
   @ValidateNested()
   @Type(() => SamplingDto)
@@ -159,4 +182,10 @@ export class SpecBody {
   @ValidateNested()
   @Type(() => MechanicsDto)
   mechanics?: MechanicsDto;
+
+  /** What changed in this revision. */
+  @Optional()
+  @IsString()
+  @Length(0, 1000)
+  note?: string;
 }
