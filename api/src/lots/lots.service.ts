@@ -6,6 +6,7 @@ import {
   IsNull,
   LessThanOrEqual,
   MoreThanOrEqual,
+  Not,
   Repository,
   type EntityManager,
   type FindOptionsWhere,
@@ -62,8 +63,10 @@ export class LotsService {
     if (query.status) where.status = query.status;
     if (query.pressId) where.pressId = query.pressId;
     if (query.specId) where.specId = query.specId;
-    if (query.flagged)
+    // true: the review queue (flagged, no disposition yet); false: lots the server has not flagged.
+    if (query.flagged === true)
       Object.assign(where, { serverVerdict: 'flagged', dispositionAction: IsNull() });
+    if (query.flagged === false) where.serverVerdict = Not('flagged');
     if (query.from && query.to) where.openedAt = Between(new Date(query.from), new Date(query.to));
     else if (query.from) where.openedAt = MoreThanOrEqual(new Date(query.from));
     else if (query.to) where.openedAt = LessThanOrEqual(new Date(query.to));

@@ -18,7 +18,7 @@ export class LotQueryDto {
   @IsIn(['open', 'submitted'])
   status?: 'open' | 'submitted';
 
-  /** `true`: the review queue — flagged and without a disposition. */
+  /** `true`: the review queue — flagged and without a disposition; `false`: lots not flagged. */
   @Optional()
   @Transform(({ value }: { value: unknown }) =>
     value === 'true' ? true : value === 'false' ? false : value,
