@@ -2,7 +2,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useBlobUrl } from '../components/useBlobUrl';
 import { useDeskCall } from './desk/call';
-import type { Disposition, DispositionAction, Lot, LotDetail } from './types';
+import type { Disposition, DispositionAction, Lot, LotDetail, LotReport } from './types';
 
 const reviewKey = (...parts: unknown[]) => ['review', ...parts] as const;
 
@@ -62,4 +62,19 @@ export function usePhotoUrl(sha256: string | null | undefined): string | undefin
     staleTime: Infinity,
   });
   return useBlobUrl(data, sha256 ?? undefined);
+}
+
+export function useLotReport(lotId: string) {
+  const { call, ready } = useDeskCall();
+  return useQuery({
+    queryKey: reviewKey('report', lotId),
+    queryFn: () => call<LotReport>(`/lots/${lotId}/report`),
+    enabled: ready,
+  });
+}
+
+/** The server's CSV of the report, one row per sampled part, as text. */
+export function useLotReportCsv() {
+  const { call } = useDeskCall();
+  return (lotId: string) => call<string>(`/lots/${lotId}/report.csv`, { timeoutMs: 30_000 });
 }

@@ -2,7 +2,12 @@
  * Shapes the plant server sends and accepts, as listed in api/src/ROUTES.md and
  * api/src/sync/README.md. Lengths mm, forces N, hardness Shore A.
  */
-import type { MaterialModel, PartSpec } from '../engine/index';
+import type {
+  CharacteristicVerdict,
+  MaterialModel,
+  PartSpec,
+  VerdictStatus,
+} from '../engine/index';
 
 export type Role = 'inspector' | 'supervisor' | 'quality' | 'admin';
 
@@ -92,6 +97,8 @@ export interface LotPlan {
   sampleSize: number;
   accept: number;
   reject: number;
+  /** The row whose plan applies after the table's arrows (the server sends it). */
+  planLetter?: string;
 }
 
 export type LotVerdict = 'pass' | 'flagged';
@@ -211,4 +218,42 @@ export interface PushResult {
   opId: string;
   status: 'applied' | 'duplicate' | 'rejected';
   reason?: string;
+}
+
+/** GET /lots/:id/report: the lot as a customer's report shows it (api/src/reports). */
+export interface LotReport {
+  generatedAt: string;
+  /** The server's words on what the estimates are and are not (DESIGN §7). */
+  notice: string;
+  lot: Pick<Lot, 'id' | 'lotNumber' | 'cavity' | 'lotSize' | 'moldedAt' | 'openedAt' | 'status'> & {
+    submittedAt: string | null;
+  };
+  part: { partNumber: string; name: string; revision: number; releasedAt: string | null };
+  compound: { code: string; name: string; model: string | null };
+  press: { code: string; name: string };
+  plan: LotPlan & SpecBody['sampling'];
+  verdict: { lot: Lot['serverVerdict']; reason: string; inspected: number; nonconforming: number };
+  expected: {
+    lowerLoad: number;
+    upperLoad: number;
+    windows?: {
+      thickness?: { min: { value: number | null }; max: { value: number | null } };
+      hardness?: { min: { value: number | null }; max: { value: number | null } };
+    };
+  } | null;
+  parts: ReportPart[];
+  dispositions: { action: DispositionAction; note: string; decidedBy: string; decidedAt: string }[];
+}
+
+export interface ReportPart {
+  sampleIndex: number;
+  recordId: string;
+  supersedes: string | null;
+  measurements: Measurements;
+  status: VerdictStatus;
+  conforming: boolean;
+  characteristics: CharacteristicVerdict[];
+  defects: Pick<Defect, 'type' | 'location' | 'severity' | 'note' | 'photoSha256'>[];
+  recordedBy: string;
+  recordedAt: string;
 }

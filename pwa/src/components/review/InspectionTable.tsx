@@ -4,6 +4,7 @@ import { asPartVerdict } from '../../inspect/deviceVerdict';
 import { formatHardness, formatQuantity } from '../../inspect/units';
 import type { UnitSystem } from '../../offline/db';
 import { StandingBadge } from '../inspect/StandingBadge';
+import { when } from '../time';
 
 /** The server's per-part records: current revisions only, the tablet's verdict beside the server's. */
 export function InspectionTable({
@@ -55,7 +56,7 @@ export function InspectionTable({
                 ))}
               </td>
               <td>{shown && <StandingBadge standing={shown} />}</td>
-              <td>{new Date(inspection.recordedAt).toLocaleString()}</td>
+              <td>{when(inspection.recordedAt)}</td>
             </tr>
           );
         })}

@@ -1,7 +1,7 @@
 import { IonButton } from '@ionic/react';
 import { useState } from 'react';
 import { useParams } from 'react-router-dom';
-import { useLotReport, useLotReportCsv } from '../../api/desk/lots';
+import { useLotReport, useLotReportCsv } from '../../api/review';
 import { QueryState } from '../../components/desk/QueryState';
 import { LotReportView } from '../../components/report/LotReportView';
 import { Screen } from '../../components/Screen';

@@ -22,55 +22,65 @@ function LotReview({ lot }: { lot: LotDetail }) {
   const press = usePresses().data?.find((p) => p.id === lot.pressId);
   const revision = spec.data?.revisions.find((r) => r.id === lot.specRevisionId);
 
+  const bad = lot.nonconforming === 1 ? '1 bad part' : `${lot.nonconforming} bad parts`;
+
   return (
-    <div className="two-columns">
-      <div>
-        <dl className="facts">
-          <div>
-            <dt>Part</dt>
-            <dd>
-              {spec.data?.partNumber} {spec.data?.name} rev {revision?.revision}
-            </dd>
-          </div>
-          <div>
-            <dt>Press</dt>
-            <dd>{press?.code}</dd>
-          </div>
-          <div>
-            <dt>Cavity</dt>
-            <dd>{lot.cavity}</dd>
-          </div>
-          <div>
-            <dt>Lot size</dt>
-            <dd>{lot.lotSize}</dd>
-          </div>
-          <div>
-            <dt>Flagged</dt>
-            <dd>{when(lot.flaggedAt)}</dd>
-          </div>
-        </dl>
-        <p className="lot-standing lot-standing-reject" data-testid="server-standing">
-          {lot.nonconforming} bad parts of {lot.plan.sampleSize}; the plan flags the lot at{' '}
-          {lot.plan.reject}. Server verdict: {lot.serverVerdict}.
-        </p>
-        {revision && <PlanSummary plan={lot.plan} sampling={revision.body.sampling} />}
-        <h2 className="section-title">Sampled parts</h2>
+    <>
+      <div className="two-columns">
+        <div>
+          <dl className="facts">
+            <div>
+              <dt>Part</dt>
+              <dd>
+                {spec.data?.partNumber} rev {revision?.revision}
+              </dd>
+            </div>
+            <div>
+              <dt>Press</dt>
+              <dd>{press?.code}</dd>
+            </div>
+            <div>
+              <dt>Cavity</dt>
+              <dd>{lot.cavity}</dd>
+            </div>
+            <div>
+              <dt>Lot size</dt>
+              <dd>{lot.lotSize}</dd>
+            </div>
+            <div>
+              <dt>Flagged</dt>
+              <dd>{when(lot.flaggedAt)}</dd>
+            </div>
+          </dl>
+          <p className="lot-standing lot-standing-reject" data-testid="server-standing">
+            {bad} of {lot.plan.sampleSize} checked; the plan flags the lot at {lot.plan.reject}.
+          </p>
+          {revision && <PlanSummary plan={lot.plan} sampling={revision.body.sampling} />}
+        </div>
+        <div>
+          <LoadChartPanel revision={revision} inspections={lot.inspections} />
+        </div>
+      </div>
+      <h2 className="section-title">Sampled parts</h2>
+      <div className="table-scroll">
         <InspectionTable inspections={lot.inspections} units={person?.units ?? 'metric'} />
-        <h2 className="section-title">Defects</h2>
-        <DefectPhotos defects={lot.defects} inspections={lot.inspections} />
       </div>
-      <div>
-        <h2 className="section-title">Load against the expected curve</h2>
-        <LoadChartPanel revision={revision} inspections={lot.inspections} />
-        {revision && <CautionNote body={revision.body} />}
-        <h2 className="section-title">Decision</h2>
-        <DispositionHistory dispositions={lot.dispositions} />
-        <DispositionForm lotId={lot.id} />
-        <IonButton fill="outline" routerLink={`/review/${lot.id}/report`}>
-          Open the lot report
-        </IonButton>
+      <div className="two-columns">
+        <div>
+          <h2 className="section-title">Defects</h2>
+          <DefectPhotos defects={lot.defects} inspections={lot.inspections} />
+        </div>
+        <div>
+          <h2 className="section-title">Decision</h2>
+          <DispositionHistory dispositions={lot.dispositions} />
+          <DispositionForm lotId={lot.id} />
+          <IonButton fill="outline" routerLink={`/review/${lot.id}/report`}>
+            Open the lot report
+          </IonButton>
+          {revision && <CautionNote body={revision.body} />}
+        </div>
       </div>
-    </div>
+    </>
   );
 }
 
