@@ -124,7 +124,9 @@ const SPEC_BODY = () => ({
   tolerance: { class: 'M2' },
   hardness: { nominal: 55, tolerance: 5 },
   compressionSetLimitPercent: 25,
+  compressionSetCondition: { temperatureC: 70, hours: 22 },
   sampling: { level: 'II', aql: 2.5, severity: 'normal' },
+  note: 'First issue',
 });
 
 const CASES: Case[] = [
@@ -215,6 +217,7 @@ const CASES: Case[] = [
       polymer: 'NBR',
       hardnessShoreA: 60,
       bulkModulusMPa: 2000,
+      notes: 'Supplier batch B',
     }),
     fields: [
       { path: 'code', kind: 'string' },
@@ -222,7 +225,58 @@ const CASES: Case[] = [
       { path: 'polymer', kind: 'enum' },
       { path: 'hardnessShoreA', kind: 'number', range: [10, 95] },
       { path: 'bulkModulusMPa', kind: 'number', range: [100, 10_000], optional: true },
+      { path: 'notes', kind: 'string', optional: true },
     ],
+  },
+  {
+    name: 'UpdateCompoundDto',
+    role: 'quality',
+    method: 'patch',
+    path: () => `/api/compounds/${ids.compound}`,
+    valid: () => ({
+      name: 'Renamed',
+      polymer: 'EPDM',
+      hardnessShoreA: 62,
+      bulkModulusMPa: 2100,
+      notes: 'Re-tested',
+    }),
+    fields: [
+      { path: 'name', kind: 'string', optional: true },
+      { path: 'polymer', kind: 'enum', optional: true },
+      { path: 'hardnessShoreA', kind: 'number', range: [10, 95], optional: true },
+      { path: 'bulkModulusMPa', kind: 'number', range: [100, 10_000], optional: true },
+      { path: 'notes', kind: 'string', optional: true },
+    ],
+  },
+  {
+    name: 'CreateAgingSetDto',
+    role: 'quality',
+    method: 'post',
+    path: () => `/api/compounds/${ids.compound}/aging`,
+    valid: () => ({
+      name: 'Set at 70 °C, 100 °C, 125 °C',
+      thresholdPercent: 40,
+      points: [
+        { temperatureC: 70, hours: 5000 },
+        { temperatureC: 100, hours: 900 },
+        { temperatureC: 125, hours: 200 },
+      ],
+    }),
+    fields: [
+      { path: 'name', kind: 'string' },
+      { path: 'thresholdPercent', kind: 'number', range: [0, 100] },
+      { path: 'points', kind: 'array' },
+      { path: 'points.0.temperatureC', kind: 'number', range: [-100, 400] },
+      { path: 'points.2.hours', kind: 'number', range: [0, 1_000_000] },
+    ],
+  },
+  {
+    name: 'PublishFitDto',
+    role: 'quality',
+    method: 'post',
+    path: () => `/api/compounds/${ids.compound}/fits/${ids.fit}/publish`,
+    valid: () => ({ note: 'Re-fitted with planar data' }),
+    fields: [{ path: 'note', kind: 'string', optional: true }],
   },
   {
     name: 'CreateTestSetDto',
@@ -256,6 +310,7 @@ const CASES: Case[] = [
       model: { kind: 'mooney-rivlin', c10: 0.3, c01: 0.05 },
       testSetIds: [ids.testSet],
       objective: 'relative',
+      weights: { uniaxial: 1, equibiaxial: 0.5, planar: 2 },
     }),
     fields: [
       { path: 'model', kind: 'object' },
@@ -263,6 +318,9 @@ const CASES: Case[] = [
       { path: 'model.c10', kind: 'number', range: [-1000, 1000] },
       { path: 'testSetIds', kind: 'array' },
       { path: 'objective', kind: 'enum' },
+      { path: 'weights', kind: 'object', optional: true },
+      { path: 'weights.uniaxial', kind: 'number', range: [0, 1000], optional: true },
+      { path: 'weights.planar', kind: 'number', range: [0, 1000], optional: true },
     ],
   },
   {
@@ -298,6 +356,10 @@ const CASES: Case[] = [
       { path: 'hardness.nominal', kind: 'number', range: [20, 90] },
       { path: 'hardness.tolerance', kind: 'number', range: [1, 15] },
       { path: 'compressionSetLimitPercent', kind: 'number', range: [1, 100], optional: true },
+      { path: 'compressionSetCondition', kind: 'object', optional: true },
+      { path: 'compressionSetCondition.temperatureC', kind: 'number', range: [-100, 400] },
+      { path: 'compressionSetCondition.hours', kind: 'number', range: [0, 100_000] },
+      { path: 'note', kind: 'string', optional: true },
       { path: 'sampling', kind: 'object' },
       { path: 'sampling.level', kind: 'enum' },
       { path: 'sampling.aql', kind: 'enum' },
