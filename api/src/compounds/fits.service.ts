@@ -34,7 +34,10 @@ export class FitsService {
       ]);
     }
     const data = sets.flatMap((set) => set.points.map((point) => ({ mode: set.mode, ...point })));
-    const weights = dto.weights ? { ...dto.weights } : null;
+    // Only the modes sent: the DTO instance also holds the others, as undefined.
+    const weights = dto.weights
+      ? Object.fromEntries(Object.entries(dto.weights).filter(([, w]) => w !== undefined))
+      : null;
     const { model, ...result } = fitModel({
       model: dto.model as MaterialModel,
       data,
