@@ -1,13 +1,15 @@
 import type { CompoundRecord } from '../../../api/desk/types';
-import { DeskNumberField, DeskSelect } from '../DeskField';
+import { DeskSelect } from '../DeskField';
 import type { SectionProps } from './sectionProps';
+import { SpecNumberField } from './SpecNumberField';
 
 interface Props extends SectionProps {
   compounds: CompoundRecord[];
 }
 
 /** Which compound, and the load test the inspector runs on every sampled part. */
-export function LoadTestSection({ fields, problems, onChange, readOnly, compounds }: Props) {
+export function LoadTestSection({ readOnly, compounds, ...form }: Props) {
+  const { fields, problems, onChange } = form;
   const compound = compounds.find((c) => c.id === fields.compoundId);
   return (
     <fieldset className="desk-card" disabled={readOnly}>
@@ -34,20 +36,8 @@ export function LoadTestSection({ fields, problems, onChange, readOnly, compound
             ]),
           ]}
         />
-        <DeskNumberField
-          label="Test deflection"
-          unit="mm"
-          value={fields.testDeflection}
-          problem={problems.testDeflection}
-          onChange={(testDeflection) => onChange({ testDeflection })}
-        />
-        <DeskNumberField
-          label="Load tolerance ±"
-          unit="%"
-          value={fields.loadTolerancePercent}
-          problem={problems.loadTolerancePercent}
-          onChange={(loadTolerancePercent) => onChange({ loadTolerancePercent })}
-        />
+        <SpecNumberField {...form} name="testDeflection" label="Test deflection" unit="mm" />
+        <SpecNumberField {...form} name="loadTolerancePercent" label="Load tolerance ±" unit="%" />
       </div>
       {problems.compoundId && <span className="desk-problem">{problems.compoundId}</span>}
       {compound && !compound.currentFit && (

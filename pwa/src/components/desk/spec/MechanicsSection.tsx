@@ -4,9 +4,10 @@ import {
   type BulkCorrection,
 } from '../../../engine';
 import type { CompoundRecord } from '../../../api/desk/types';
-import { DeskNumberField, DeskSelect } from '../DeskField';
+import { DeskSelect } from '../DeskField';
 import { formatNumber } from '../format';
 import type { SectionProps } from './sectionProps';
+import { SpecNumberField } from './SpecNumberField';
 
 const CORRECTIONS: Record<BulkCorrection, string> = {
   lubrication: '1/E′ = 1/E + 4/(3K), lubrication theory',
@@ -19,7 +20,8 @@ interface Props extends SectionProps {
 }
 
 /** The engineering choices behind the expected load, with the defaults named. */
-export function MechanicsSection({ fields, problems, onChange, readOnly, compound }: Props) {
+export function MechanicsSection({ readOnly, compound, ...form }: Props) {
+  const { fields, onChange } = form;
   const defaults = LINDLEY_NATURAL_RUBBER;
   return (
     <fieldset className="desk-card" disabled={readOnly}>
@@ -36,11 +38,10 @@ export function MechanicsSection({ fields, problems, onChange, readOnly, compoun
             ...(Object.entries(CORRECTIONS) as [BulkCorrection, string][]),
           ]}
         />
-        <DeskNumberField
+        <SpecNumberField
+          {...form}
+          name="materialFactor"
           label="Material factor k (empty: from the hardness table)"
-          value={fields.materialFactor}
-          problem={problems.materialFactor}
-          onChange={(materialFactor) => onChange({ materialFactor })}
         />
       </div>
       <p className="desk-muted">
