@@ -33,7 +33,12 @@ export class FitsService {
         },
       ]);
     }
-    const data = sets.flatMap((set) => set.points.map((point) => ({ mode: set.mode, ...point })));
+    // In the order the engineer listed the sets: the fit's sums then run in a known order, so the
+    // same request always gives the same constants to the last digit.
+    const ordered = dto.testSetIds.map((id) => sets.find((s) => s.id === id)!);
+    const data = ordered.flatMap((set) =>
+      set.points.map((point) => ({ mode: set.mode, ...point })),
+    );
     // Only the modes sent: the DTO instance also holds the others, as undefined.
     const weights = dto.weights
       ? Object.fromEntries(Object.entries(dto.weights).filter(([, w]) => w !== undefined))
