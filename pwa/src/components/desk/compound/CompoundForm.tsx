@@ -1,5 +1,6 @@
 import { useId, useState, type ReactNode } from 'react';
 import { POLYMERS, type NewCompound, type Polymer } from '../../../api/desk/types';
+import { useSubmission } from '../useSubmission';
 
 interface Props {
   initial?: Partial<NewCompound>;
@@ -43,29 +44,18 @@ export function CompoundForm({ initial = {}, codeFixed, submitLabel, onSubmit, o
     bulk: initial.bulkModulusMPa === undefined ? '' : String(initial.bulkModulusMPa),
     notes: initial.notes ?? '',
   });
-  const [error, setError] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
+  const { busy, error, submit } = useSubmission();
   const found = problems(fields);
   const set = (patch: Partial<Fields>) => setFields({ ...fields, ...patch });
 
-  async function submit() {
-    setBusy(true);
-    setError(null);
-    try {
-      await onSubmit({
-        code: fields.code.trim(),
-        name: fields.name.trim(),
-        polymer: fields.polymer,
-        hardnessShoreA: Number(fields.hardness),
-        ...(fields.bulk.trim() ? { bulkModulusMPa: Number(fields.bulk) } : {}),
-        ...(fields.notes.trim() ? { notes: fields.notes.trim() } : {}),
-      });
-    } catch (failure) {
-      setError(failure instanceof Error ? failure.message : String(failure));
-    } finally {
-      setBusy(false);
-    }
-  }
+  const compound = (): NewCompound => ({
+    code: fields.code.trim(),
+    name: fields.name.trim(),
+    polymer: fields.polymer,
+    hardnessShoreA: Number(fields.hardness),
+    ...(fields.bulk.trim() ? { bulkModulusMPa: Number(fields.bulk) } : {}),
+    ...(fields.notes.trim() ? { notes: fields.notes.trim() } : {}),
+  });
 
   const field = (key: keyof Fields, label: string, input: ReactNode) => (
     <div className="desk-field">
@@ -80,7 +70,7 @@ export function CompoundForm({ initial = {}, codeFixed, submitLabel, onSubmit, o
       className="desk-card"
       onSubmit={(event) => {
         event.preventDefault();
-        void submit();
+        void submit(() => onSubmit(compound()));
       }}
     >
       <div className="desk-grid desk-grid--4">

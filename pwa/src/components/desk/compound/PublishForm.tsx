@@ -1,4 +1,5 @@
 import { useId, useState } from 'react';
+import { useSubmission } from '../useSubmission';
 
 interface Props {
   onPublish(note: string): Promise<unknown>;
@@ -14,20 +15,7 @@ export function PublishForm({
 }: Props) {
   const id = useId();
   const [note, setNote] = useState('');
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-
-  async function publish() {
-    setBusy(true);
-    setError(null);
-    try {
-      await onPublish(note.trim());
-    } catch (failure) {
-      setError(failure instanceof Error ? failure.message : String(failure));
-    } finally {
-      setBusy(false);
-    }
-  }
+  const { busy, error, submit } = useSubmission();
 
   return (
     <div className="desk-field desk-field--grow">
@@ -49,7 +37,7 @@ export function PublishForm({
           type="button"
           className="desk-primary"
           disabled={busy || !note.trim()}
-          onClick={() => void publish()}
+          onClick={() => void submit(() => onPublish(note.trim()))}
         >
           {busy ? 'Publishing…' : label}
         </button>

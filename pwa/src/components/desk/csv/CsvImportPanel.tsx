@@ -1,5 +1,6 @@
 import { useId, useMemo, useState } from 'react';
 import type { NewTestSet } from '../../../api/desk/types';
+import { useSubmission } from '../useSubmission';
 import { CsvPreview } from './CsvPreview';
 import { CsvSource } from './CsvSource';
 import { ImportSummary } from './ImportSummary';
@@ -30,8 +31,7 @@ export function CsvImportPanel({ onSave }: Props) {
   const id = useId();
   const [loaded, setLoaded] = useState<Loaded | null>(null);
   const [temperature, setTemperature] = useState('');
-  const [saving, setSaving] = useState(false);
-  const [error, setError] = useState<string | null>(null);
+  const { busy: saving, error, submit, clearError } = useSubmission();
 
   const result = useMemo(
     () => (loaded ? applyMapping(loaded.table, loaded.mapping) : null),
@@ -40,7 +40,7 @@ export function CsvImportPanel({ onSave }: Props) {
 
   function read(text: string, name: string) {
     const table = readCsvTable(text);
-    setError(null);
+    clearError();
     setLoaded({ table, mapping: guessMapping(table), name });
   }
 
@@ -60,16 +60,10 @@ export function CsvImportPanel({ onSave }: Props) {
         },
       ];
     });
-    setSaving(true);
-    setError(null);
-    try {
+    await submit(async () => {
       await onSave(sets);
       setLoaded(null);
-    } catch (failure) {
-      setError(failure instanceof Error ? failure.message : String(failure));
-    } finally {
-      setSaving(false);
-    }
+    });
   }
 
   const temperatureBad = temperature.trim() !== '' && !Number.isFinite(Number(temperature));
