@@ -1,3 +1,5 @@
+import { editableRows } from '../editableRows';
+
 export interface AgingRow {
   temperature: string;
   hours: string;
@@ -20,8 +22,7 @@ export function rowProblem(row: AgingRow): string | null {
 
 /** Times to the end-of-life threshold, one row per oven temperature. */
 export function AgingTable({ rows, onChange }: Props) {
-  const set = (index: number, patch: Partial<AgingRow>) =>
-    onChange(rows.map((row, i) => (i === index ? { ...row, ...patch } : row)));
+  const { set, remove } = editableRows(rows, onChange);
   return (
     <>
       <table className="desk-table desk-table--compact" aria-label="Aging results">
@@ -58,10 +59,7 @@ export function AgingTable({ rows, onChange }: Props) {
                 </td>
                 <td className="desk-muted">{problem}</td>
                 <td>
-                  <button
-                    type="button"
-                    onClick={() => onChange(rows.filter((_, i) => i !== index))}
-                  >
+                  <button type="button" onClick={() => remove(index)}>
                     Remove
                   </button>
                 </td>

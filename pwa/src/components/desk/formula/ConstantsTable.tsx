@@ -1,3 +1,4 @@
+import { editableRows } from '../editableRows';
 import type { FormulaDraft, FormulaProblem } from './reviewFormula';
 
 interface Props {
@@ -8,8 +9,7 @@ interface Props {
 
 /** Named constants with their starting values; a row with a problem is marked where it is. */
 export function ConstantsTable({ constants, problems, onChange }: Props) {
-  const set = (index: number, patch: Partial<FormulaDraft['constants'][number]>) =>
-    onChange(constants.map((c, i) => (i === index ? { ...c, ...patch } : c)));
+  const { set, remove } = editableRows(constants, onChange);
   return (
     <table className="desk-table desk-table--compact" aria-label="Constants">
       <thead>
@@ -43,10 +43,7 @@ export function ConstantsTable({ constants, problems, onChange }: Props) {
                 />
               </td>
               <td>
-                <button
-                  type="button"
-                  onClick={() => onChange(constants.filter((_, i) => i !== index))}
-                >
+                <button type="button" onClick={() => remove(index)}>
                   Remove
                 </button>
               </td>
