@@ -1,5 +1,6 @@
 import type { UseQueryResult } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
+import { ErrorAlert } from './ErrorAlert';
 
 interface Props<T> {
   query: UseQueryResult<T>;
@@ -14,9 +15,9 @@ export function QueryState<T>({ query, what, children }: Props<T>) {
   }
   if (query.isError) {
     return (
-      <p className="desk-callout desk-callout--error" role="alert">
+      <ErrorAlert>
         Could not fetch {what}: {query.error.message}
-      </p>
+      </ErrorAlert>
     );
   }
   return <>{children(query.data)}</>;

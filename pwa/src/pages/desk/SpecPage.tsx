@@ -13,6 +13,7 @@ import {
   NEW_SPEC_FIELDS,
   type SpecFields,
 } from '../../components/desk/spec/specForm';
+import { ErrorAlert } from '../../components/desk/ErrorAlert';
 
 /** What the editor shows: a stored revision, or a new draft started from one (or from scratch). */
 type Editing = { kind: 'stored'; revisionId: string } | { kind: 'new'; from: SpecFields };
@@ -53,11 +54,7 @@ function DraftActions({
 
   return (
     <div className="desk-card">
-      {error && (
-        <p className="desk-callout desk-callout--error" role="alert">
-          The server refused: {error.message}
-        </p>
-      )}
+      {error && <ErrorAlert>The server refused: {error.message}</ErrorAlert>}
       {confirming ? (
         <>
           <p>

@@ -6,6 +6,7 @@ import { DeskLayout } from '../../components/desk/DeskLayout';
 import { formatDate } from '../../components/desk/format';
 import { QueryState } from '../../components/desk/QueryState';
 import { SHAPE_NAMES } from '../../components/desk/spec/specForm';
+import { ErrorAlert } from '../../components/desk/ErrorAlert';
 
 function NewSpecForm({ onDone }: { onDone(): void }) {
   const id = useId();
@@ -50,11 +51,7 @@ function NewSpecForm({ onDone }: { onDone(): void }) {
           onChange={(e) => setDescription(e.target.value)}
         />
       </div>
-      {create.isError && (
-        <p className="desk-callout desk-callout--error" role="alert">
-          {create.error.message}
-        </p>
-      )}
+      {create.isError && <ErrorAlert>{create.error.message}</ErrorAlert>}
       <div className="desk-actions">
         <button
           type="submit"

@@ -1,6 +1,7 @@
 import { useId, useState, type ReactNode } from 'react';
 import { POLYMERS, type NewCompound, type Polymer } from '../../../api/desk/types';
 import { useSubmission } from '../useSubmission';
+import { ErrorAlert } from '../ErrorAlert';
 
 interface Props {
   initial?: Partial<NewCompound>;
@@ -140,11 +141,7 @@ export function CompoundForm({ initial = {}, codeFixed, submitLabel, onSubmit, o
           onChange={(e) => set({ notes: e.target.value })}
         />,
       )}
-      {error && (
-        <p className="desk-callout desk-callout--error" role="alert">
-          {error}
-        </p>
-      )}
+      {error && <ErrorAlert>{error}</ErrorAlert>}
       <div className="desk-actions">
         <button
           type="submit"

@@ -1,5 +1,6 @@
 import { useId, useState } from 'react';
 import { useSubmission } from '../useSubmission';
+import { ErrorAlert } from '../ErrorAlert';
 
 interface Props {
   onPublish(note: string): Promise<unknown>;
@@ -27,11 +28,7 @@ export function PublishForm({
         placeholder="e.g. refit on the March lab series, all three modes"
         onChange={(e) => setNote(e.target.value)}
       />
-      {error && (
-        <p className="desk-callout desk-callout--error" role="alert">
-          {error}
-        </p>
-      )}
+      {error && <ErrorAlert>{error}</ErrorAlert>}
       <div className="desk-actions">
         <button
           type="button"

@@ -14,6 +14,7 @@ import {
   type ColumnMapping,
   type CsvTable,
 } from './stressStrainCsv';
+import { ErrorAlert } from '../ErrorAlert';
 
 interface Props {
   /** Saves one test set per mode found in the file. */
@@ -101,11 +102,7 @@ export function CsvImportPanel({ onSave }: Props) {
             </div>
           </div>
           <ImportSummary result={result} />
-          {error && (
-            <p className="desk-callout desk-callout--error" role="alert">
-              The server did not take the test data: {error}
-            </p>
-          )}
+          {error && <ErrorAlert>The server did not take the test data: {error}</ErrorAlert>}
           <div className="desk-actions">
             <button
               type="button"

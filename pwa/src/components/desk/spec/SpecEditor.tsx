@@ -12,6 +12,7 @@ import { draftPartSpec } from './partSpec';
 import { deriveSpec } from './specDerived';
 import { bodyFromFields, type SpecFields } from './specForm';
 import { ToleranceSection } from './ToleranceSection';
+import { ErrorAlert } from '../ErrorAlert';
 
 interface Props {
   initial: SpecFields;
@@ -53,11 +54,7 @@ function Derived({
     );
   }
   if ('error' in derivation) {
-    return (
-      <p className="desk-callout desk-callout--error" role="alert">
-        The engine cannot work this spec out — {derivation.error}
-      </p>
-    );
+    return <ErrorAlert>The engine cannot work this spec out — {derivation.error}</ErrorAlert>;
   }
   // Unbonded faces held by friction lie between the lubricated and the bonded estimate.
   const bounded = !body.bonded && body.unbondedFaces !== 'lubricated';
