@@ -1,5 +1,5 @@
 import type { DimensionName } from '../../../api/desk/types';
-import type { LoadEstimate, WindowEdge } from '../../../engine';
+import type { AcceptanceWindows, LoadEstimate, WindowEdge } from '../../../engine';
 import { formatNumber } from '../format';
 import { LoadChart } from '../../review/LoadChart';
 import { DIMENSION_LABELS } from './specForm';
@@ -19,6 +19,31 @@ function Edge({ edge, unit, testId }: { edge: WindowEdge; unit: string; testId: 
       {formatNumber(edge.value, 5)} {unit}{' '}
       <span className="desk-muted">({edge.iterations} Newton steps)</span>
     </span>
+  );
+}
+
+/** One quantity's acceptance window, from its lower to its upper edge. */
+function WindowRow({
+  label,
+  quantity,
+  windows,
+  unit,
+}: {
+  label: string;
+  quantity: 'thickness' | 'hardness';
+  windows: AcceptanceWindows;
+  unit: string;
+}) {
+  return (
+    <tr>
+      <th scope="row">{label}</th>
+      <td>
+        <Edge edge={windows[quantity].min} unit={unit} testId={`window-${quantity}-min`} />
+      </td>
+      <td>
+        <Edge edge={windows[quantity].max} unit={unit} testId={`window-${quantity}-max`} />
+      </td>
+    </tr>
   );
 }
 
@@ -138,24 +163,18 @@ export function DerivedPanel({ derivation, testDeflection, bounded }: Props) {
           </tr>
         </thead>
         <tbody>
-          <tr>
-            <th scope="row">thickness (other dimensions nominal)</th>
-            <td>
-              <Edge edge={windows.thickness.min} unit="mm" testId="window-thickness-min" />
-            </td>
-            <td>
-              <Edge edge={windows.thickness.max} unit="mm" testId="window-thickness-max" />
-            </td>
-          </tr>
-          <tr>
-            <th scope="row">hardness (nominal size)</th>
-            <td>
-              <Edge edge={windows.hardness.min} unit="Shore A" testId="window-hardness-min" />
-            </td>
-            <td>
-              <Edge edge={windows.hardness.max} unit="Shore A" testId="window-hardness-max" />
-            </td>
-          </tr>
+          <WindowRow
+            label="thickness (other dimensions nominal)"
+            quantity="thickness"
+            windows={windows}
+            unit="mm"
+          />
+          <WindowRow
+            label="hardness (nominal size)"
+            quantity="hardness"
+            windows={windows}
+            unit="Shore A"
+          />
         </tbody>
       </table>
     </section>
