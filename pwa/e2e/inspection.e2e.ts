@@ -60,7 +60,11 @@ describe('at the press and on the shift', () => {
   });
   // What the tablet showed when a step gave up, to see why.
   const keepFailure = (name: string) =>
-    onTestFailed(() => screenshot(tablet.page, `failed-${name}`));
+    onTestFailed(async () => {
+      await screenshot(tablet.page, `failed-${name}-tablet`);
+      if (supervisorDesk) await screenshot(supervisorDesk.page, `failed-${name}-supervisor`);
+      if (adminDesk) await screenshot(adminDesk.page, `failed-${name}-admin`);
+    });
   afterAll(async () => {
     await tablet?.close();
     await supervisorDesk?.close();
@@ -182,6 +186,7 @@ describe('at the press and on the shift', () => {
   });
 
   it('(b) the supervisor reviews the lot, decides, and opens its report', async () => {
+    keepFailure('b');
     supervisorDesk = await openBrowser();
     const { page } = supervisorDesk;
     await page.goto(baseUrl);
@@ -221,6 +226,8 @@ describe('at the press and on the shift', () => {
   });
 
   it('(c) two inspectors share the tablet; each record is theirs on the server', async () => {
+    keepFailure('c');
+    keepFailure('c');
     adminDesk = await openBrowser();
     const admin = adminDesk.page;
     await admin.goto(baseUrl);

@@ -51,9 +51,17 @@ export async function switchByPin(page: Page, name: string, pin: string): Promis
   await view.getByTestId('pin-input').press('Enter');
 }
 
+/** Waits for a page transition to end: a tap during Ionic's animation may go nowhere. */
+export async function settled(page: Page): Promise<void> {
+  await page.waitForFunction(
+    () => document.querySelectorAll('div.ion-page:not(.ion-page-hidden)').length === 1,
+  );
+}
+
 export async function waitForBoard(page: Page): Promise<void> {
   await page.waitForURL('**/presses');
   await screen(page).getByTestId('press-P1').waitFor();
+  await settled(page);
 }
 
 export async function startLot(

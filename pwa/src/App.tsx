@@ -2,17 +2,17 @@ import { IonApp, IonRouterOutlet, IonSplitPane } from '@ionic/react';
 import { IonReactRouter } from '@ionic/react-router';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { useEffect } from 'react';
-import { Navigate, Route } from 'react-router-dom';
-import { useSession } from './auth/session';
+import { Route } from 'react-router-dom';
 import { AppMenu } from './components/AppMenu';
 import { RequireRole } from './components/RequireRole';
+import { SessionGate } from './components/SessionGate';
 import { UpdatePrompt } from './components/UpdatePrompt';
 import { requestPersistentStorage } from './offline/persist';
 import { syncScheduler } from './offline/scheduler';
 import { SetPinPage } from './pages/SetPinPage';
 import { SignInPage } from './pages/SignInPage';
 import { deskRoutes } from './pages/desk/routes';
-import { DESK_ROLES, homeFor, ROUTES } from './routes';
+import { DESK_ROLES, ROUTES } from './routes';
 
 const queryClient = new QueryClient({
   defaultOptions: {
@@ -20,12 +20,6 @@ const queryClient = new QueryClient({
     queries: { retry: 1, staleTime: 15_000, networkMode: 'always' },
   },
 });
-
-function Home() {
-  const { loaded, person } = useSession();
-  if (!loaded) return null;
-  return <Navigate to={person ? homeFor(person.role) : '/sign-in'} replace />;
-}
 
 export default function App() {
   useEffect(() => {
@@ -39,9 +33,9 @@ export default function App() {
       <IonApp>
         <IonReactRouter>
           <IonSplitPane contentId="main" when="(min-width: 1100px)">
+            <SessionGate />
             <AppMenu contentId="main" />
             <IonRouterOutlet id="main">
-              <Route path="/" element={<Home />} />
               <Route path="/sign-in" element={<SignInPage />} />
               <Route path="/pin" element={<SetPinPage />} />
               {ROUTES.map(({ path, roles, page: Page }) => (
@@ -58,7 +52,6 @@ export default function App() {
               {deskRoutes((page) => (
                 <RequireRole roles={DESK_ROLES}>{page}</RequireRole>
               ))}
-              <Route path="*" element={<Home />} />
             </IonRouterOutlet>
           </IonSplitPane>
         </IonReactRouter>

@@ -1,4 +1,5 @@
 import { lazy, type ComponentType } from 'react';
+import { matchPath } from 'react-router-dom';
 import {
   albumsOutline,
   alertCircleOutline,
@@ -135,4 +136,21 @@ export function navFor(role: Role): NavEntry[] {
 /** Where a person lands after signing in: the first entry of their menu. */
 export function homeFor(role: Role): string {
   return navFor(role)[0]?.path ?? '/sign-in';
+}
+
+/** Pages anyone may see; `/pin` needs someone on the tablet but any role. */
+const OPEN_PATHS = ['/sign-in'];
+
+function rolesAt(pathname: string): readonly Role[] | undefined {
+  if (pathname === '/pin') return ['inspector', 'supervisor', 'quality', 'admin'];
+  if (pathname === '/desk' || pathname.startsWith('/desk/')) return DESK_ROLES;
+  return ROUTES.find((route) => matchPath(route.path, pathname))?.roles;
+}
+
+/** Where a person at this path should be sent instead, or undefined to stay. */
+export function redirectFor(pathname: string, role: Role | undefined): string | undefined {
+  if (OPEN_PATHS.includes(pathname)) return undefined;
+  if (!role) return '/sign-in';
+  const allowed = rolesAt(pathname);
+  return allowed?.includes(role) ? undefined : homeFor(role);
 }

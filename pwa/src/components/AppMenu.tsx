@@ -9,13 +9,14 @@ import {
   IonToolbar,
   useIonAlert,
 } from '@ionic/react';
-import { NavLink, useNavigate } from 'react-router-dom';
+import { NavLink } from 'react-router-dom';
 import { leaveDevice, setUnits, useSession } from '../auth/session';
 import { signOut } from '../auth/tokens';
 import type { UnitSystem } from '../offline/db';
 import { navFor, type NavEntry } from '../routes';
 import { useColorScheme, type ColorScheme } from '../theme/colorScheme';
 import { Segmented } from './Segmented';
+import { useGo } from './useGo';
 import './app-menu.css';
 
 const SECTIONS: NavEntry['section'][] = ['Work', 'Desk', 'Administration'];
@@ -34,14 +35,14 @@ const SCHEME_CHOICES: { value: ColorScheme; label: string }[] = [
 /** Side menu: the person's pages by role, their units, the theme, and handing over the tablet. */
 export function AppMenu({ contentId }: { contentId: string }) {
   const { person } = useSession();
-  const navigate = useNavigate();
+  const go = useGo();
   const [scheme, setScheme] = useColorScheme();
   const [confirm] = useIonAlert();
   const entries = person ? navFor(person.role) : [];
 
   const handOver = async () => {
     await leaveDevice();
-    navigate('/sign-in', { replace: true });
+    go.root('/sign-in');
   };
   const askSignOut = () => {
     if (!person) return;

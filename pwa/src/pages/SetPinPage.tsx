@@ -1,20 +1,19 @@
 import { IonButton, IonContent, IonPage } from '@ionic/react';
 import { useState } from 'react';
-import { Navigate, useNavigate } from 'react-router-dom';
 import { setPin } from '../auth/pin';
 import { useSession } from '../auth/session';
 import { PinPad } from '../components/PinPad';
+import { useGo } from '../components/useGo';
 import { homeFor } from '../routes';
 import '../components/signin/sign-in.css';
 
 /** Right after a first password sign-in: a PIN lets this person switch back in, offline too. */
 export function SetPinPage() {
   const { loaded, person } = useSession();
-  const navigate = useNavigate();
+  const { root } = useGo();
   const [first, setFirst] = useState<string>();
   const [message, setMessage] = useState<string>();
-  if (!loaded) return null;
-  if (!person) return <Navigate to="/sign-in" replace />;
+  if (!loaded || !person) return null;
   const home = homeFor(person.role);
 
   const submit = async (pin: string) => {
@@ -29,7 +28,7 @@ export function SetPinPage() {
       return;
     }
     await setPin(person.userId, pin);
-    navigate(home, { replace: true });
+    root(home);
   };
 
   return (
@@ -49,7 +48,7 @@ export function SetPinPage() {
               message={message}
               onSubmit={(pin) => void submit(pin)}
             />
-            <IonButton fill="clear" onClick={() => navigate(home, { replace: true })}>
+            <IonButton fill="clear" onClick={() => root(home)}>
               Not now
             </IonButton>
           </section>

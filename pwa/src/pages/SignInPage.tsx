@@ -1,10 +1,10 @@
 import { IonContent, IonPage } from '@ionic/react';
-import { useState } from 'react';
-import { useNavigate } from 'react-router-dom';
-import { makeCurrent, usePeopleWithPin } from '../auth/session';
+import { useEffect, useState } from 'react';
+import { makeCurrent, usePeopleWithPin, useSession } from '../auth/session';
 import type { DevicePerson } from '../offline/db';
 import { syncScheduler } from '../offline/scheduler';
 import { homeFor } from '../routes';
+import { useGo } from '../components/useGo';
 import { PasswordSignIn } from '../components/signin/PasswordSignIn';
 import { PinSwitch } from '../components/signin/PinSwitch';
 import '../components/signin/sign-in.css';
@@ -14,14 +14,22 @@ import '../components/signin/sign-in.css';
  * PIN for someone who signed in here before (works offline, checked on the device).
  */
 export function SignInPage() {
-  const navigate = useNavigate();
+  const { root } = useGo();
+  const { person: current } = useSession();
   const people = usePeopleWithPin();
   const [switching, setSwitching] = useState<DevicePerson>();
+  const [arriving, setArriving] = useState<string>();
+
+  // Move on only once the session shows the new person, so no page sees a stale session.
+  useEffect(() => {
+    if (!arriving || current?.userId !== arriving) return;
+    root(current.pinHash ? homeFor(current.role) : '/pin');
+  }, [arriving, current, root]);
 
   const enter = async (person: DevicePerson) => {
     await makeCurrent(person.userId);
     void syncScheduler.syncNow();
-    navigate(person.pinHash ? homeFor(person.role) : '/pin', { replace: true });
+    setArriving(person.userId);
   };
 
   return (

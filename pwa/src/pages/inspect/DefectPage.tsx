@@ -1,12 +1,13 @@
 import { IonButton } from '@ionic/react';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { useParams, useSearchParams } from 'react-router-dom';
 import type { DefectLocation, DefectSeverity } from '../../api/types';
 import { useSession } from '../../auth/session';
 import { Field } from '../../components/Field';
 import { PhotoPicker } from '../../components/inspect/PhotoPicker';
 import { Screen } from '../../components/Screen';
+import { useGo } from '../../components/useGo';
 import { DEFECT_TYPES, LOCATIONS, SEVERITIES } from '../../inspect/defects';
 import { useLot, useLotRecords } from '../../offline/catalog';
 import {
@@ -41,7 +42,7 @@ export function DefectPage() {
 
 function DefectEntry({ lot, parts }: { lot: LocalLot; parts: LocalPart[] }) {
   const [search] = useSearchParams();
-  const navigate = useNavigate();
+  const go = useGo();
   const { person } = useSession();
   const [photo, setPhoto] = useState<PhotoToKeep>();
   const { register, handleSubmit, formState } = useForm<DefectForm>({
@@ -68,7 +69,7 @@ function DefectEntry({ lot, parts }: { lot: LocalLot; parts: LocalPart[] }) {
       person.userId,
     );
     syncScheduler.syncSoon();
-    navigate(`/lots/${lot.id}`, { replace: true });
+    go.back(`/lots/${lot.id}`);
   });
 
   const { errors } = formState;

@@ -1,5 +1,5 @@
 import { IonButton, useIonAlert } from '@ionic/react';
-import { useNavigate, useParams } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
 import { useSession } from '../../auth/session';
 import { CautionNote } from '../../components/inspect/CautionNote';
 import { DefectList } from '../../components/inspect/DefectList';
@@ -8,6 +8,7 @@ import { LotStanding } from '../../components/inspect/LotStanding';
 import { PartsTable } from '../../components/inspect/PartsTable';
 import { PlanSummary } from '../../components/inspect/PlanSummary';
 import { Screen } from '../../components/Screen';
+import { useGo } from '../../components/useGo';
 import { lotTally } from '../../inspect/lotTally';
 import { usePreparedSpec } from '../../inspect/usePreparedSpec';
 import { useLot, useLotRecords, useSpecRevision } from '../../offline/catalog';
@@ -17,7 +18,7 @@ import { syncScheduler } from '../../offline/scheduler';
 /** One lot at the press: its plan, where it stands, the parts and defects, and finishing it. */
 export function LotPage() {
   const { lotId } = useParams();
-  const navigate = useNavigate();
+  const go = useGo();
   const { person } = useSession();
   const lot = useLot(lotId);
   const spec = useSpecRevision(lot?.specRevisionId);
@@ -62,7 +63,7 @@ export function LotPage() {
               person.userId,
             )
               .then(() => syncScheduler.syncSoon())
-              .then(() => navigate('/presses')),
+              .then(() => go.root('/presses')),
         },
       ],
     });

@@ -1,12 +1,13 @@
 import { IonButton } from '@ionic/react';
 import { useForm, useWatch } from 'react-hook-form';
-import { useNavigate, useParams } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
 import type { LotPlan, PulledSpec } from '../../api/types';
 import { useSession } from '../../auth/session';
 import { Field } from '../../components/Field';
 import { CautionNote } from '../../components/inspect/CautionNote';
 import { PlanSummary } from '../../components/inspect/PlanSummary';
 import { Screen } from '../../components/Screen';
+import { useGo } from '../../components/useGo';
 import { useEngine, type Engine } from '../../inspect/engine';
 import { useOpenLots, usePresses, useReleasedSpecs } from '../../offline/catalog';
 import { openLot } from '../../offline/records';
@@ -42,7 +43,7 @@ const WHOLE = /^\d+$/;
 
 export function OpenLotPage() {
   const { pressId } = useParams();
-  const navigate = useNavigate();
+  const go = useGo();
   const { person } = useSession();
   const engine = useEngine();
   const press = usePresses()?.find((p) => p.id === pressId);
@@ -77,7 +78,7 @@ export function OpenLotPage() {
       person.userId,
     );
     syncScheduler.syncSoon();
-    navigate(`/lots/${lot.id}`, { replace: true });
+    go.instead(`/lots/${lot.id}`);
   });
 
   const { errors } = formState;

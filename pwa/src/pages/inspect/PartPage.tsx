@@ -1,7 +1,7 @@
 import { IonButton } from '@ionic/react';
 import { useEffect, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { useParams, useSearchParams } from 'react-router-dom';
 import type { PulledSpec } from '../../api/types';
 import type { PartVerdict, PreparedSpec } from '../../engine/index';
 import { useSession } from '../../auth/session';
@@ -10,6 +10,7 @@ import { QuantityField } from '../../components/inspect/QuantityField';
 import { StandingBadge } from '../../components/inspect/StandingBadge';
 import { VerdictPanel } from '../../components/inspect/VerdictPanel';
 import { Screen } from '../../components/Screen';
+import { useGo } from '../../components/useGo';
 import type { Engine } from '../../inspect/engine';
 import {
   partFields,
@@ -139,7 +140,7 @@ function PartEntry({
 export function PartPage() {
   const { lotId } = useParams();
   const [search] = useSearchParams();
-  const navigate = useNavigate();
+  const go = useGo();
   const { person } = useSession();
   const lot = useLot(lotId);
   const spec = useSpecRevision(lot?.specRevisionId);
@@ -162,7 +163,7 @@ export function PartPage() {
     syncScheduler.syncSoon();
     setSaved(part);
     if (correcting || part.sampleIndex >= (lot?.plan.sampleSize ?? 0)) {
-      navigate(`/lots/${lotId}`, { replace: true });
+      go.back(`/lots/${lotId}`);
     }
   };
 
