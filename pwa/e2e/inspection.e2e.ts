@@ -12,6 +12,7 @@ import {
   recordPart,
   screen,
   serverAs,
+  shot,
   signInWithPassword,
   startLot,
   switchByPin,
@@ -85,19 +86,19 @@ describe('at the press and on the shift', () => {
     await page.goto(baseUrl);
     await page.waitForURL('**/sign-in');
     await screen(page).getByLabel('Email', { exact: true }).waitFor();
-    await screenshot(page, 'sign-in');
+    await shot(page, 'sign-in');
 
     await signInWithPassword(page, 'inspector@demo.test');
     await page.waitForURL('**/pin');
-    await screenshot(page, 'choose-pin');
+    await shot(page, 'choose-pin');
     await choosePin(page, '1357');
     await waitForBoard(page);
     await waitForServiceWorker(page);
-    await screenshot(page, 'board');
+    await shot(page, 'board');
 
     await context.setOffline(true);
     await startLot(page, { press: 'P1', part: PART, lotNumber: LOT_A, lotSize: 8 });
-    await screenshot(page, 'start-lot');
+    await shot(page, 'start-lot');
     await screen(page).getByRole('button', { name: 'Start checking' }).click();
     await page.waitForURL(/\/lots\/[0-9a-f-]{36}$/);
     const lotUrl = page.url();
@@ -110,7 +111,7 @@ describe('at the press and on the shift', () => {
       if (i === 2) {
         await screen(page).getByTestId('field-load').waitFor();
         await screen(page).getByTestId('field-load').fill(String(HEAVY.load));
-        await screenshot(page, 'part-entry-out');
+        await shot(page, 'part-entry-out');
         await screen(page).getByTestId('field-load').fill('');
       }
       verdicts.push(await recordPart(page, i === 2 ? HEAVY : GOOD));
@@ -134,7 +135,7 @@ describe('at the press and on the shift', () => {
       .getByTestId('photo-file')
       .setInputFiles({ name: 'flash.png', mimeType: 'image/png', buffer: picture });
     await view.getByTestId('photo-preview').waitFor();
-    await screenshot(page, 'defect');
+    await shot(page, 'defect');
     await view.getByRole('button', { name: 'Save defect' }).click();
     await page.waitForURL(lotUrl);
 
@@ -151,7 +152,7 @@ describe('at the press and on the shift', () => {
     expect(await screen(page).getByTestId('status-waiting').textContent()).toBe(
       `Waiting to send: ${sampleSize + 2} records, 1 photo`,
     );
-    await screenshot(page, 'lot-offline');
+    await shot(page, 'lot-offline');
 
     await screen(page).getByRole('button', { name: 'Finish lot' }).click();
     await page.locator('ion-alert button', { hasText: 'Finish lot' }).click();
@@ -163,7 +164,7 @@ describe('at the press and on the shift', () => {
         'Nothing waiting',
       );
     });
-    await screenshot(page, 'board-synced');
+    await shot(page, 'board-synced');
 
     const lot = await lotOnServer(LOT_A);
     expect(lot.inspections).toHaveLength(sampleSize);
@@ -196,7 +197,7 @@ describe('at the press and on the shift', () => {
     await page.waitForURL('**/review');
     const row = screen(page).locator('tr', { hasText: LOT_A });
     await row.waitFor();
-    await screenshot(page, 'review-queue');
+    await shot(page, 'review-queue');
 
     await row.click();
     await page.waitForURL(/\/review\/[0-9a-f-]{36}$/);
@@ -204,7 +205,7 @@ describe('at the press and on the shift', () => {
     await view.getByTestId('inspection-table').waitFor();
     await view.getByTestId('server-photo').waitFor();
     await view.locator('.recharts-surface').first().waitFor();
-    await screenshot(page, 'lot-review');
+    await shot(page, 'lot-review');
 
     await view.getByText('Sort all', { exact: true }).click();
     await view
@@ -216,7 +217,7 @@ describe('at the press and on the shift', () => {
     await view.getByRole('link', { name: 'Open the lot report' }).click();
     await page.waitForURL('**/report');
     await screen(page).getByTestId('lot-report').waitFor();
-    await screenshot(page, 'lot-report');
+    await shot(page, 'lot-report');
     const download = page.waitForEvent('download');
     await screen(page).getByTestId('report-csv').click();
     expect((await download).suggestedFilename()).toBe(`lot-${LOT_A}.csv`);
@@ -242,13 +243,13 @@ describe('at the press and on the shift', () => {
     await people.getByLabel('First password', { exact: true }).fill('demo-password-1');
     await people.getByRole('button', { name: 'Add person' }).click();
     await people.getByText(SECOND.email).waitFor();
-    await screenshot(admin, 'admin-people');
+    await shot(admin, 'admin-people');
     await admin.goto(`${baseUrl}/admin/presses`);
     await screen(admin).getByText('Compression press 1').waitFor();
-    await screenshot(admin, 'admin-presses');
+    await shot(admin, 'admin-presses');
     await admin.goto(`${baseUrl}/admin/mail`);
     await screen(admin).getByTestId('mail-list').waitFor();
-    await screenshot(admin, 'admin-mail');
+    await shot(admin, 'admin-mail');
 
     const { page, context } = tablet;
     await handOver(page);
@@ -257,7 +258,7 @@ describe('at the press and on the shift', () => {
     await choosePin(page, SECOND.pin);
     await waitForBoard(page);
     await handOver(page);
-    await screenshot(page, 'sign-in-people');
+    await shot(page, 'sign-in-people');
 
     await context.setOffline(true);
     await switchByPin(page, 'Ines', '1357');
@@ -273,7 +274,7 @@ describe('at the press and on the shift', () => {
     await screen(page)
       .getByRole('button', { name: new RegExp(SECOND.name) })
       .click();
-    await screenshot(page, 'pin-switch');
+    await shot(page, 'pin-switch');
     await screen(page).getByTestId('pin-input').fill(SECOND.pin);
     await screen(page).getByTestId('pin-input').press('Enter');
     await waitForBoard(page);

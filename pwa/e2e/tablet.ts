@@ -4,6 +4,7 @@
  */
 import { expect } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
+import { screenshot } from './browser';
 
 export const DEMO_PASSWORD = 'demo-password-1';
 
@@ -56,6 +57,12 @@ export async function settled(page: Page): Promise<void> {
   await page.waitForFunction(
     () => document.querySelectorAll('div.ion-page:not(.ion-page-hidden)').length === 1,
   );
+}
+
+/** A screenshot of the screen once Ionic's page transition is over. */
+export async function shot(page: Page, name: string): Promise<void> {
+  await settled(page);
+  await screenshot(page, name);
 }
 
 export async function waitForBoard(page: Page): Promise<void> {

@@ -4,6 +4,7 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { useEffect } from 'react';
 import { Route } from 'react-router-dom';
 import { AppMenu } from './components/AppMenu';
+import { SessionProvider, useSession } from './auth/session';
 import { RequireRole } from './components/RequireRole';
 import { SessionGate } from './components/SessionGate';
 import { UpdatePrompt } from './components/UpdatePrompt';
@@ -21,6 +22,38 @@ const queryClient = new QueryClient({
   },
 });
 
+/** Routes start once the session is known, so every page can render its IonPage at once. */
+function AppRoutes() {
+  const { loaded } = useSession();
+  if (!loaded) return null;
+  return (
+    <IonReactRouter>
+      <IonSplitPane contentId="main" when="(min-width: 1100px)">
+        <SessionGate />
+        <AppMenu contentId="main" />
+        <IonRouterOutlet id="main">
+          <Route path="/sign-in" element={<SignInPage />} />
+          <Route path="/pin" element={<SetPinPage />} />
+          {ROUTES.map(({ path, roles, page: Page }) => (
+            <Route
+              key={path}
+              path={path}
+              element={
+                <RequireRole roles={roles}>
+                  <Page />
+                </RequireRole>
+              }
+            />
+          ))}
+          {deskRoutes((page) => (
+            <RequireRole roles={DESK_ROLES}>{page}</RequireRole>
+          ))}
+        </IonRouterOutlet>
+      </IonSplitPane>
+    </IonReactRouter>
+  );
+}
+
 export default function App() {
   useEffect(() => {
     void requestPersistentStorage();
@@ -31,30 +64,9 @@ export default function App() {
   return (
     <QueryClientProvider client={queryClient}>
       <IonApp>
-        <IonReactRouter>
-          <IonSplitPane contentId="main" when="(min-width: 1100px)">
-            <SessionGate />
-            <AppMenu contentId="main" />
-            <IonRouterOutlet id="main">
-              <Route path="/sign-in" element={<SignInPage />} />
-              <Route path="/pin" element={<SetPinPage />} />
-              {ROUTES.map(({ path, roles, page: Page }) => (
-                <Route
-                  key={path}
-                  path={path}
-                  element={
-                    <RequireRole roles={roles}>
-                      <Page />
-                    </RequireRole>
-                  }
-                />
-              ))}
-              {deskRoutes((page) => (
-                <RequireRole roles={DESK_ROLES}>{page}</RequireRole>
-              ))}
-            </IonRouterOutlet>
-          </IonSplitPane>
-        </IonReactRouter>
+        <SessionProvider>
+          <AppRoutes />
+        </SessionProvider>
         <UpdatePrompt />
       </IonApp>
     </QueryClientProvider>

@@ -11,11 +11,6 @@ import {
 } from 'ionicons/icons';
 import type { Role } from './api/types';
 import { BoardPage } from './pages/inspect/BoardPage';
-import { DefectPage } from './pages/inspect/DefectPage';
-import { LotPage } from './pages/inspect/LotPage';
-import { OpenLotPage } from './pages/inspect/OpenLotPage';
-import { PartPage } from './pages/inspect/PartPage';
-import { SyncPage } from './pages/SyncPage';
 
 export interface AppRoute {
   path: string;
@@ -32,9 +27,31 @@ export interface NavEntry {
   section: 'Work' | 'Desk' | 'Administration';
 }
 
-/** Pages used away from the press load on first visit, keeping the inspector's download small. */
-function lazyPage<M>(load: () => Promise<M>, name: keyof M): ComponentType {
+const preloads: { roles: readonly Role[]; load: () => Promise<unknown> }[] = [];
+
+/**
+ * Pages load apart from the first screen, keeping the inspector's first download small. Each is
+ * fetched once someone of its roles is on the tablet and the browser is idle (preloadPagesFor),
+ * so opening it does not wait on the network: Ionic's outlet gives a page only a moment.
+ */
+function lazyPage<M>(roles: readonly Role[], load: () => Promise<M>, name: keyof M): ComponentType {
+  preloads.push({ roles, load });
   return lazy(async () => ({ default: (await load())[name] as ComponentType }));
+}
+
+/** Give the first screen this long to itself before fetching the rest. */
+const PRELOAD_AFTER_MS = 3000;
+
+/** Fetches the role's pages when the browser is idle, once the first screen has had its turn. */
+export function preloadPagesFor(role: Role): void {
+  const idle = window.requestIdleCallback ?? ((run: () => void) => run());
+  setTimeout(
+    () =>
+      idle(() => {
+        for (const page of preloads) if (page.roles.includes(role)) void page.load();
+      }),
+    PRELOAD_AFTER_MS,
+  );
 }
 
 const AT_THE_PRESS: readonly Role[] = ['inspector', 'supervisor'];
@@ -45,23 +62,44 @@ const workRoutes: AppRoute[] = [
   {
     path: '/review',
     roles: REVIEWERS,
-    page: lazyPage(() => import('./pages/review/ReviewQueuePage'), 'ReviewQueuePage'),
+    page: lazyPage(REVIEWERS, () => import('./pages/review/ReviewQueuePage'), 'ReviewQueuePage'),
   },
+  // The board is the inspector's first screen; the rest of their pages follow it on idle.
   { path: '/presses', roles: AT_THE_PRESS, page: BoardPage },
-  { path: '/sync', roles: AT_THE_PRESS, page: SyncPage },
-  { path: '/presses/:pressId/start', roles: AT_THE_PRESS, page: OpenLotPage },
-  { path: '/lots/:lotId', roles: AT_THE_PRESS, page: LotPage },
-  { path: '/lots/:lotId/part', roles: AT_THE_PRESS, page: PartPage },
-  { path: '/lots/:lotId/defect', roles: AT_THE_PRESS, page: DefectPage },
+  {
+    path: '/sync',
+    roles: AT_THE_PRESS,
+    page: lazyPage(AT_THE_PRESS, () => import('./pages/SyncPage'), 'SyncPage'),
+  },
+  {
+    path: '/presses/:pressId/start',
+    roles: AT_THE_PRESS,
+    page: lazyPage(AT_THE_PRESS, () => import('./pages/inspect/OpenLotPage'), 'OpenLotPage'),
+  },
+  {
+    path: '/lots/:lotId',
+    roles: AT_THE_PRESS,
+    page: lazyPage(AT_THE_PRESS, () => import('./pages/inspect/LotPage'), 'LotPage'),
+  },
+  {
+    path: '/lots/:lotId/part',
+    roles: AT_THE_PRESS,
+    page: lazyPage(AT_THE_PRESS, () => import('./pages/inspect/PartPage'), 'PartPage'),
+  },
+  {
+    path: '/lots/:lotId/defect',
+    roles: AT_THE_PRESS,
+    page: lazyPage(AT_THE_PRESS, () => import('./pages/inspect/DefectPage'), 'DefectPage'),
+  },
   {
     path: '/review/:lotId',
     roles: REVIEWERS,
-    page: lazyPage(() => import('./pages/review/LotReviewPage'), 'LotReviewPage'),
+    page: lazyPage(REVIEWERS, () => import('./pages/review/LotReviewPage'), 'LotReviewPage'),
   },
   {
     path: '/review/:lotId/report',
     roles: REVIEWERS,
-    page: lazyPage(() => import('./pages/review/LotReportPage'), 'LotReportPage'),
+    page: lazyPage(REVIEWERS, () => import('./pages/review/LotReportPage'), 'LotReportPage'),
   },
 ];
 
@@ -69,17 +107,17 @@ const adminRoutes: AppRoute[] = [
   {
     path: '/admin/people',
     roles: ADMIN,
-    page: lazyPage(() => import('./pages/admin/PeoplePage'), 'PeoplePage'),
+    page: lazyPage(ADMIN, () => import('./pages/admin/PeoplePage'), 'PeoplePage'),
   },
   {
     path: '/admin/presses',
     roles: ADMIN,
-    page: lazyPage(() => import('./pages/admin/PressesPage'), 'PressesPage'),
+    page: lazyPage(ADMIN, () => import('./pages/admin/PressesPage'), 'PressesPage'),
   },
   {
     path: '/admin/mail',
     roles: ADMIN,
-    page: lazyPage(() => import('./pages/admin/MailPage'), 'MailPage'),
+    page: lazyPage(ADMIN, () => import('./pages/admin/MailPage'), 'MailPage'),
   },
 ];
 

@@ -1,7 +1,7 @@
 import { useEffect } from 'react';
 import { useLocation } from 'react-router-dom';
 import { useSession } from '../auth/session';
-import { redirectFor } from '../routes';
+import { preloadPagesFor, redirectFor } from '../routes';
 import { useGo } from './useGo';
 
 /**
@@ -13,6 +13,9 @@ export function SessionGate() {
   const { pathname } = useLocation();
   const { root } = useGo();
   const role = person?.role;
+  useEffect(() => {
+    if (role) preloadPagesFor(role);
+  }, [role]);
   useEffect(() => {
     if (!loaded) return;
     const target = redirectFor(pathname, role);

@@ -26,32 +26,35 @@ export function StatusStrip() {
 
   return (
     <div className="status-strip" role="status" data-testid="status-strip">
-      <span className={online ? 'dot dot-online' : 'dot dot-offline'} aria-hidden />
-      <span>{online ? 'Online' : 'Offline'}</span>
-      <span data-testid="status-waiting">{waiting}</span>
-      <span>Last sync {status?.lastSyncAt ? when(status.lastSyncAt) : 'not yet'}</span>
-      {status?.error && (
-        <span className="status-error" data-testid="status-error">
-          {status.error}
-        </span>
-      )}
-      {refused > 0 && (
-        <Link className="status-refused" to="/sync">
-          {plural(refused, 'item', 'items')} refused — see why
+      <div className="status-facts">
+        <span className={online ? 'dot dot-online' : 'dot dot-offline'} aria-hidden />
+        <span>{online ? 'Online' : 'Offline'}</span>
+        <span data-testid="status-waiting">{waiting}</span>
+        <span>Last sync {status?.lastSyncAt ? when(status.lastSyncAt) : 'not yet'}</span>
+        {refused > 0 && (
+          <Link className="status-refused" to="/sync">
+            {plural(refused, 'item', 'items')} refused — see why
+          </Link>
+        )}
+        {status?.error && (
+          <span className="status-error" data-testid="status-error" title={status.error}>
+            {status.error}
+          </span>
+        )}
+      </div>
+      <div className="status-actions">
+        <IonButton
+          size="default"
+          fill="outline"
+          onClick={() => void syncScheduler.syncNow()}
+          disabled={status?.running}
+        >
+          {status?.running ? <IonSpinner name="dots" /> : 'Sync now'}
+        </IonButton>
+        <Link className="status-details" to="/sync">
+          Details
         </Link>
-      )}
-      <span className="status-spacer" />
-      <IonButton
-        size="default"
-        fill="outline"
-        onClick={() => void syncScheduler.syncNow()}
-        disabled={status?.running}
-      >
-        {status?.running ? <IonSpinner name="dots" /> : 'Sync now'}
-      </IonButton>
-      <Link className="status-details" to="/sync">
-        Details
-      </Link>
+      </div>
     </div>
   );
 }

@@ -1,4 +1,4 @@
-import { setMeta } from './db';
+import { getMeta, setMeta } from './db';
 import { describeSyncError, syncOnce, type SyncReport } from './sync';
 
 /** What the status strip shows about syncing; kept in the device store so every tab sees it. */
@@ -39,6 +39,7 @@ const DEFAULTS: SchedulerOptions = {
  */
 export class SyncScheduler {
   private status: SyncStatus = { running: false, failures: 0 };
+  private restored = false;
   private current?: Promise<void>;
   private again = false;
   private readonly timers = new Set<ReturnType<typeof setTimeout>>();
@@ -109,6 +110,12 @@ export class SyncScheduler {
   }
 
   private async pass(): Promise<void> {
+    if (!this.restored) {
+      // Keep the last sync time across reloads; a pass left "running" by a closed tab is over.
+      const stored = await getMeta<SyncStatus>(SYNC_STATUS_KEY);
+      this.status = { ...this.status, ...stored, running: false };
+      this.restored = true;
+    }
     const startedAt = new Date().toISOString();
     await this.publish({ ...this.status, running: true, lastAttemptAt: startedAt });
     try {

@@ -9,11 +9,11 @@ import '../components/signin/sign-in.css';
 
 /** Right after a first password sign-in: a PIN lets this person switch back in, offline too. */
 export function SetPinPage() {
-  const { loaded, person } = useSession();
+  const { person } = useSession();
   const { root } = useGo();
   const [first, setFirst] = useState<string>();
   const [message, setMessage] = useState<string>();
-  if (!loaded || !person) return null;
+  if (!person) return null;
   const home = homeFor(person.role);
 
   const submit = async (pin: string) => {

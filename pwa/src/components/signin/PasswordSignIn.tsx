@@ -1,15 +1,9 @@
 import { IonButton, IonSpinner } from '@ionic/react';
-import { useForm } from 'react-hook-form';
-import { useState } from 'react';
+import { useState, type FormEvent } from 'react';
 import { ApiError, NetworkError } from '../../api/http';
 import { signIn } from '../../auth/tokens';
 import type { DevicePerson } from '../../offline/db';
 import { Field } from '../Field';
-
-interface Credentials {
-  email: string;
-  password: string;
-}
 
 function problemWith(error: unknown): string {
   if (error instanceof ApiError && error.status === 401)
@@ -23,33 +17,54 @@ function problemWith(error: unknown): string {
   return error instanceof ApiError ? error.reason : 'Sign-in failed.';
 }
 
+/**
+ * Email and password. Plain state rather than react-hook-form: this is the first screen, and
+ * two fields do not justify fetching the form library before the inspector's board.
+ */
 export function PasswordSignIn({ onSignedIn }: { onSignedIn(person: DevicePerson): void }) {
-  const { register, handleSubmit, formState } = useForm<Credentials>();
+  const [email, setEmail] = useState('');
+  const [password, setPassword] = useState('');
+  const [missing, setMissing] = useState<{ email?: string; password?: string }>({});
   const [problem, setProblem] = useState<string>();
+  const [busy, setBusy] = useState(false);
 
-  const submit = handleSubmit(async ({ email, password }) => {
+  const submit = async (event: FormEvent) => {
+    event.preventDefault();
+    const blanks = {
+      email: email.trim() ? undefined : 'Enter your email.',
+      password: password ? undefined : 'Enter your password.',
+    };
+    setMissing(blanks);
+    if (blanks.email || blanks.password) return;
     setProblem(undefined);
+    setBusy(true);
     try {
       onSignedIn(await signIn(email.trim(), password));
     } catch (error) {
       setProblem(problemWith(error));
+    } finally {
+      setBusy(false);
     }
-  });
+  };
 
   return (
     <form className="sign-in-form" onSubmit={(event) => void submit(event)} noValidate>
-      <Field label="Email" error={formState.errors.email?.message}>
+      <Field label="Email" error={missing.email}>
         <input
           type="email"
+          name="email"
           autoComplete="username"
-          {...register('email', { required: 'Enter your email.' })}
+          value={email}
+          onChange={(event) => setEmail(event.target.value)}
         />
       </Field>
-      <Field label="Password" error={formState.errors.password?.message}>
+      <Field label="Password" error={missing.password}>
         <input
           type="password"
+          name="password"
           autoComplete="current-password"
-          {...register('password', { required: 'Enter your password.' })}
+          value={password}
+          onChange={(event) => setPassword(event.target.value)}
         />
       </Field>
       {problem && (
@@ -57,8 +72,8 @@ export function PasswordSignIn({ onSignedIn }: { onSignedIn(person: DevicePerson
           {problem}
         </p>
       )}
-      <IonButton type="submit" expand="block" disabled={formState.isSubmitting}>
-        {formState.isSubmitting ? <IonSpinner name="dots" /> : 'Sign in'}
+      <IonButton type="submit" expand="block" disabled={busy}>
+        {busy ? <IonSpinner name="dots" /> : 'Sign in'}
       </IonButton>
     </form>
   );

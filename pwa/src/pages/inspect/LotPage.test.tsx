@@ -56,7 +56,7 @@ describe('lot at the press', () => {
   it('counts a major defect logged later against its part', async () => {
     const part = await recordPadPart(1, 1);
     await recordDefect(
-      { lotId: PAD_LOT.id, partId: part.id, type: 'voids', location: 'flexing', severity: 'major' },
+      { lotId: PAD_LOT.id, partId: part.id, type: 'void', location: 'flexing', severity: 'major' },
       undefined,
       'u-ines',
     );

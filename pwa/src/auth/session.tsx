@@ -1,4 +1,5 @@
 import { useLiveQuery } from 'dexie-react-hooks';
+import { createContext, useContext, type ReactNode } from 'react';
 import { db, getMeta, setMeta, type DevicePerson, type UnitSystem } from '../offline/db';
 
 const CURRENT = 'currentUserId';
@@ -26,14 +27,36 @@ export async function setUnits(userId: string, units: UnitSystem): Promise<void>
 }
 
 export interface SessionState {
-  /** Undefined while the device store is being read. */
+  /** False only while the device store is first being read. */
   loaded: boolean;
   person?: DevicePerson;
 }
 
-export function useSession(): SessionState {
-  const person = useLiveQuery(async () => (await currentPerson()) ?? null, []);
+const SessionContext = createContext<SessionState | undefined>(undefined);
+
+function useStoredSession(skip: boolean): SessionState {
+  const person = useLiveQuery(
+    async () => (skip ? undefined : ((await currentPerson()) ?? null)),
+    [skip],
+  );
   return person === undefined ? { loaded: false } : { loaded: true, person: person ?? undefined };
+}
+
+/**
+ * Reads the session once for the whole app, so a page mounting later has it on its first
+ * render. Ionic's outlet waits only briefly for a route's IonPage; a page that first renders
+ * nothing while IndexedDB answers can be left invisible.
+ */
+export function SessionProvider({ children }: { children: ReactNode }) {
+  const session = useStoredSession(false);
+  return <SessionContext.Provider value={session}>{children}</SessionContext.Provider>;
+}
+
+/** The person using the tablet; outside a SessionProvider (tests) it reads the store itself. */
+export function useSession(): SessionState {
+  const provided = useContext(SessionContext);
+  const own = useStoredSession(provided !== undefined);
+  return provided ?? own;
 }
 
 /** People who may switch back in by PIN, most recent first. */
