@@ -165,6 +165,14 @@ describe('at the press and on the shift', () => {
       );
     });
     await shot(page, 'board-synced');
+    await page.getByRole('link', { name: 'Sending' }).click();
+    await screen(page).getByText('Refused by the server').waitFor();
+    await shot(page, 'sending');
+    await page.getByText('Dark', { exact: true }).click();
+    await page.getByRole('link', { name: 'Presses' }).click();
+    await waitForBoard(page);
+    await shot(page, 'board-dark');
+    await page.getByText('Auto', { exact: true }).click();
 
     const lot = await lotOnServer(LOT_A);
     expect(lot.inspections).toHaveLength(sampleSize);

@@ -60,15 +60,33 @@ function fromServer(lot: Lot): LocalLot {
 }
 
 /**
- * Open lots, this tablet's and those other tablets opened (from pull), so a shift can carry
- * on a lot started elsewhere. The device's own copy wins: it may be ahead of the server.
+ * The device's copy of a lot while it still has something to send for it; once everything has
+ * gone out, the server's copy (which a supervisor may have reopened for a re-check).
  */
+async function current(local: LocalLot, remote: Lot | undefined): Promise<LocalLot> {
+  if (!remote) return local;
+  const waiting = await db.outbox
+    .where('recordId')
+    .equals(local.id)
+    .filter((op) => op.state === 'waiting')
+    .count();
+  return waiting > 0 ? local : { ...local, status: remote.status };
+}
+
+async function serverLot(id: string): Promise<Lot | undefined> {
+  return (await db.server.get({ kind: 'lot', id }))?.data as Lot | undefined;
+}
+
+/** Open lots, this tablet's and those other tablets opened (from pull), newest first. */
 export function useOpenLots(): LocalLot[] | undefined {
   return useLiveQuery(async () => {
-    const local = await db.lots.toArray();
+    const remote = new Map((await serverRows<Lot>('lot')).map((lot) => [lot.id, lot]));
+    const local = await Promise.all(
+      (await db.lots.toArray()).map((lot) => current(lot, remote.get(lot.id))),
+    );
     const known = new Set(local.map((lot) => lot.id));
-    const remote = (await serverRows<Lot>('lot')).filter((lot) => !known.has(lot.id));
-    return [...local, ...remote.map(fromServer)]
+    const others = [...remote.values()].filter((lot) => !known.has(lot.id)).map(fromServer);
+    return [...local, ...others]
       .filter((lot) => lot.status === 'open')
       .sort((a, b) => b.openedAt.localeCompare(a.openedAt));
   });
@@ -77,10 +95,9 @@ export function useOpenLots(): LocalLot[] | undefined {
 export function useLot(lotId: string | undefined): LocalLot | null | undefined {
   return useLiveQuery(async () => {
     if (!lotId) return null;
-    const local = await db.lots.get(lotId);
-    if (local) return local;
-    const remote = await db.server.get({ kind: 'lot', id: lotId });
-    return remote ? fromServer(remote.data as Lot) : null;
+    const [local, remote] = await Promise.all([db.lots.get(lotId), serverLot(lotId)]);
+    if (local) return current(local, remote);
+    return remote ? fromServer(remote) : null;
   }, [lotId]);
 }
 

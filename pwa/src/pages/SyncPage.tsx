@@ -7,7 +7,6 @@ import { describeOp } from '../inspect/describeOp';
 import { db } from '../offline/db';
 import { sendAgain } from '../offline/outbox';
 import { requestPersistentStorage } from '../offline/persist';
-import { syncScheduler } from '../offline/scheduler';
 import { useSyncState } from '../offline/useSyncState';
 
 const SHOWN = 50;
@@ -46,9 +45,6 @@ export function SyncPage() {
           {state.status.error}
         </p>
       )}
-      <IonButton onClick={() => void syncScheduler.syncNow()} disabled={state?.status?.running}>
-        Sync now
-      </IonButton>
 
       <h2 className="section-title">Refused by the server</h2>
       <ul className="plain-list">

@@ -1,3 +1,4 @@
+import { Link } from 'react-router-dom';
 import type { UnitSystem } from '../../offline/db';
 import type { LotRecords } from '../../offline/catalog';
 import type { LotTally } from '../../inspect/lotTally';
@@ -10,10 +11,12 @@ interface PartsTableProps {
   /** The engine's judgement, once it has loaded. */
   tally: LotTally | undefined;
   units: UnitSystem;
+  /** While the lot is open a part can be corrected: a new record that replaces it. */
+  correctable: boolean;
 }
 
 /** The lot's sampled parts as recorded on this tablet, newest correction of each. */
-export function PartsTable({ records, tally, units }: PartsTableProps) {
+export function PartsTable({ records, tally, units, correctable }: PartsTableProps) {
   if (records.parts.length === 0) return <p>No part checked yet.</p>;
   return (
     <table className="data-table" data-testid="parts-table">
@@ -26,6 +29,7 @@ export function PartsTable({ records, tally, units }: PartsTableProps) {
           <th>Verdict</th>
           <th>Counts as</th>
           <th>Where</th>
+          {correctable && <th />}
         </tr>
       </thead>
       <tbody>
@@ -45,6 +49,13 @@ export function PartsTable({ records, tally, units }: PartsTableProps) {
               <td>
                 <RecordState op={records.ops.get(part.id)} />
               </td>
+              {correctable && (
+                <td>
+                  <Link className="table-link" to={`/lots/${part.lotId}/part?correct=${part.id}`}>
+                    Correct
+                  </Link>
+                </td>
+              )}
             </tr>
           );
         })}

@@ -24,8 +24,9 @@ export function PlanSummary({ plan, sampling }: { plan: LotPlan; sampling: SpecB
         <span>bad parts flag the lot (Re)</span>
       </div>
       <p className="plan-basis">
-        ISO 2859-1 single sampling, code letter {plan.codeLetter}, level {sampling.level}, AQL{' '}
-        {sampling.aql} %, {sampling.severity} inspection.
+        ISO 2859-1 single sampling, code letter {plan.codeLetter}
+        {plan.planLetter && plan.planLetter !== plan.codeLetter && ` (plan of ${plan.planLetter})`},
+        level {sampling.level}, AQL {sampling.aql} %, {sampling.severity} inspection.
       </p>
     </div>
   );

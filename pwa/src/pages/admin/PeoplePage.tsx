@@ -9,6 +9,7 @@ import {
 } from '../../api/admin';
 import type { Role, User } from '../../api/types';
 import { QueryState } from '../../components/desk/QueryState';
+import { useSession } from '../../auth/session';
 import { Field } from '../../components/Field';
 import { Screen } from '../../components/Screen';
 import { describeSyncError } from '../../offline/sync';
@@ -62,7 +63,7 @@ function NewPersonForm() {
   );
 }
 
-function PersonRow({ user }: { user: User }) {
+function PersonRow({ user, self }: { user: User; self: boolean }) {
   const changeRole = useChangeRole();
   const deactivate = useDeactivateUser();
   const problem = changeRole.error ?? deactivate.error;
@@ -74,7 +75,7 @@ function PersonRow({ user }: { user: User }) {
         <select
           className="table-select"
           value={user.role}
-          disabled={!user.active}
+          disabled={!user.active || self}
           aria-label={`Role of ${user.name}`}
           onChange={(event) => changeRole.mutate({ id: user.id, role: event.target.value as Role })}
         >
@@ -84,7 +85,9 @@ function PersonRow({ user }: { user: User }) {
         </select>
       </td>
       <td>
-        {user.active ? (
+        {self ? (
+          'you'
+        ) : user.active ? (
           <IonButton fill="outline" color="danger" onClick={() => deactivate.mutate(user.id)}>
             Deactivate
           </IonButton>
@@ -100,6 +103,7 @@ function PersonRow({ user }: { user: User }) {
 /** Who may sign in and what they may do; deactivating ends all their sign-ins at once. */
 export function PeoplePage() {
   const users = useUsers();
+  const { person } = useSession();
   return (
     <Screen title="People">
       <QueryState query={users} what="the people">
@@ -115,7 +119,7 @@ export function PeoplePage() {
             </thead>
             <tbody>
               {list.map((user) => (
-                <PersonRow key={user.id} user={user} />
+                <PersonRow key={user.id} user={user} self={user.id === person?.userId} />
               ))}
             </tbody>
           </table>

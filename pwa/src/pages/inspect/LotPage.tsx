@@ -104,7 +104,12 @@ export function LotPage() {
       )}
       {spec && <CautionNote body={spec.body} />}
       <h2 className="section-title">Parts</h2>
-      <PartsTable records={records} tally={tally} units={person?.units ?? 'metric'} />
+      <PartsTable
+        records={records}
+        tally={tally}
+        units={person?.units ?? 'metric'}
+        correctable={open}
+      />
       <h2 className="section-title">Defects</h2>
       <DefectList records={records} />
     </Screen>

@@ -70,6 +70,7 @@ export function OpenLotPage() {
         moldedAt: new Date(`${form.moldedOn}T00:00:00`).toISOString(),
         plan: {
           codeLetter: plan.codeLetter,
+          planLetter: plan.planLetter,
           sampleSize: plan.sampleSize,
           accept: plan.accept,
           reject: plan.reject,

@@ -13,6 +13,7 @@ import { DispositionForm } from '../../components/review/DispositionForm';
 import { DispositionHistory } from '../../components/review/DispositionHistory';
 import { InspectionTable } from '../../components/review/InspectionTable';
 import { LoadChartPanel } from '../../components/review/LoadChartPanel';
+import { ReopenForm } from '../../components/review/ReopenForm';
 import { Screen } from '../../components/Screen';
 import { when } from '../../components/time';
 
@@ -74,6 +75,9 @@ function LotReview({ lot }: { lot: LotDetail }) {
           <h2 className="section-title">Decision</h2>
           <DispositionHistory dispositions={lot.dispositions} />
           <DispositionForm lotId={lot.id} />
+          {person?.role === 'supervisor' && lot.status === 'submitted' && (
+            <ReopenForm lotId={lot.id} />
+          )}
           <IonButton fill="outline" routerLink={`/review/${lot.id}/report`}>
             Open the lot report
           </IonButton>
