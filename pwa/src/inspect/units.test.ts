@@ -37,8 +37,8 @@ describe('parseQuantity', () => {
 
 describe('display', () => {
   it('shows SI values in the person’s units', () => {
-    expect(formatQuantity(25.4, 'length', 'imperial')).toBe('1.0000 in');
-    expect(formatQuantity(1880.4, 'force', 'metric')).toBe('1880 N');
+    expect(formatQuantity(25.4, 'length', 'imperial')).toBe('1.0000\u00a0in');
+    expect(formatQuantity(1880.4, 'force', 'metric')).toBe('1880\u00a0N');
     expect(formatQuantity(undefined, 'force', 'metric')).toBe('—');
   });
 
@@ -48,7 +48,7 @@ describe('display', () => {
   });
 
   it('shows the median of the durometer readings', () => {
-    expect(formatHardness([57, 55, 56])).toBe('56 Shore A');
-    expect(formatHardness([55, 56, 57, 60])).toBe('56.5 Shore A');
+    expect(formatHardness([57, 55, 56])).toBe('56\u00a0Shore\u00a0A');
+    expect(formatHardness([55, 56, 57, 60])).toBe('56.5\u00a0Shore\u00a0A');
   });
 });

@@ -36,7 +36,8 @@ export function unitOf(kind: QuantityKind, system: UnitSystem): UnitInfo {
 export function formatQuantity(si: number | undefined, kind: QuantityKind, system: UnitSystem) {
   if (si === undefined) return '—';
   const unit = unitOf(kind, system);
-  return `${(si / unit.toSi).toFixed(unit.decimals)} ${unit.symbol}`;
+  // A no-break space keeps a value and its unit on one line in narrow table columns.
+  return `${(si / unit.toSi).toFixed(unit.decimals)}\u00a0${unit.symbol}`;
 }
 
 export type Parsed = { value: number } | { problem: string } | { empty: true };
@@ -88,7 +89,7 @@ export function formatHardness(readings: number[] | undefined): string {
   const sorted = [...readings].sort((a, b) => a - b);
   const mid = sorted.length >> 1;
   const value = sorted.length % 2 ? sorted[mid] : ((sorted[mid - 1] ?? 0) + (sorted[mid] ?? 0)) / 2;
-  return `${value} Shore A`;
+  return `${value}\u00a0Shore\u00a0A`;
 }
 
 /** An SI value as a bare number in the person's units, for a field to be edited. */
