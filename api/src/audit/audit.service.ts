@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { LessThan, Repository, type EntityManager, type FindOptionsWhere } from 'typeorm';
+import { insertRows } from '../database/insert-rows.js';
 import type { AuditQueryDto } from './dto/audit-query.dto.js';
 import { AuditEntry } from './entities/audit-entry.entity.js';
 
@@ -43,17 +44,9 @@ export class AuditService {
     });
   }
 
-  /** Many entries in few statements (SQLite caps the values bound to one statement). */
-  async recordMany(manager: EntityManager, rows: AuditRow[]): Promise<void> {
-    for (let i = 0; i < rows.length; i += 100) {
-      await manager
-        .createQueryBuilder()
-        .insert()
-        .into(AuditEntry)
-        .values(rows.slice(i, i + 100))
-        .updateEntity(false)
-        .execute();
-    }
+  /** Many entries in few statements. */
+  recordMany(manager: EntityManager, rows: AuditRow[]): Promise<void> {
+    return insertRows<AuditRow>(manager, AuditEntry, rows);
   }
 
   list({ entity, entityId, before, limit }: AuditQueryDto): Promise<AuditEntry[]> {

@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { auditRow } from '../audit/audit.service.js';
+import { insertRows } from '../database/insert-rows.js';
 import { partVerdict } from '../engine.js';
 import { currentInspections, LotsService } from '../lots/lots.service.js';
 import { SpecsService } from '../specs/specs.service.js';
@@ -54,14 +55,7 @@ export class InspectionsService {
       recordedAt: ctx.recordedAt,
       receivedAt: new Date(),
     };
-    // Nothing to read back (no generated columns): skipping that saves a good share of a push.
-    await ctx.manager
-      .createQueryBuilder()
-      .insert()
-      .into(Inspection)
-      .values(inspection)
-      .updateEntity(false)
-      .execute();
+    await insertRows(ctx.manager, Inspection, [inspection]);
     // The record itself never changes, so the audit names it rather than copying it.
     ctx.batch.audit.push(
       auditRow(ctx, 'inspection.record', 'inspection', p.id, null, {

@@ -4,6 +4,7 @@ import type { AuthUser } from '../auth/access.js';
 import { AuditService } from '../audit/audit.service.js';
 import { AuthService, vouchesFor } from '../auth/auth.service.js';
 import { errorBody } from '../common/error.filter.js';
+import { insertRows } from '../database/insert-rows.js';
 import { Transactions } from '../database/transactions.js';
 import { InspectionsService } from '../inspections/inspections.service.js';
 import { LotsService } from '../lots/lots.service.js';
@@ -110,16 +111,7 @@ export class SyncService {
         });
         out.push({ opId: op.opId, status: 'applied' });
       }
-      // A row per applied op, in a few statements (SQLite caps the values bound to one).
-      for (let i = 0; i < applied.length; i += 100) {
-        await manager
-          .createQueryBuilder()
-          .insert()
-          .into(AppliedOp)
-          .values(applied.slice(i, i + 100))
-          .updateEntity(false)
-          .execute();
-      }
+      await insertRows(manager, AppliedOp, applied);
       await this.audit.recordMany(manager, batch.audit);
       for (const lotId of touched) await this.lots.recount(manager, lotId);
       return out;
