@@ -8,8 +8,8 @@ import {
 } from './least-squares.js';
 
 /*
- * Levenberg–Marquardt as a trust-region method with Moré's scaling (Moré 1978, Lecture Notes
- * in Mathematics 630; MINPACK lmder/lmpar [S]): scale dⱼ = max(dⱼ, ‖Jⱼ‖), step accepted when
+ * Levenberg–Marquardt as a trust-region method with Moré's scaling (Moré 1978, LNM
+ * 630; MINPACK lmder/lmpar [S]): scale dⱼ = max(dⱼ, ‖Jⱼ‖), step accepted when
  * actual/predicted reduction ≥ 1e-4, stops on ftol / xtol / gtol and says which.
  */
 
