@@ -100,6 +100,25 @@ test('the server keeps its own verdict beside the device’s and judges the lot 
   expect(lot.body.plan).toMatchObject({ sampleSize: 5, accept: 0, reject: 1 });
 });
 
+test('a record with its plan dimensions is applied and each dimension judged (ISO 3302-1 M2)', async () => {
+  const { lotId, op } = lotOpen(t, r);
+  // GM-1040 is an 80 mm square pad; side 80.1 mm lies inside M2's ± 0.50 mm for 63–100 mm.
+  const measured = part(t, r, lotId, 1);
+  (measured.payload.measurements as Record<string, unknown>).dimensions = { side: 80.1 };
+  const { body } = await t.push([op, measured]);
+  expect(statuses(body)).toEqual(['applied', 'applied']);
+  const lot = await h
+    .http()
+    .get(`/api/lots/${lotId}`)
+    .auth(t.token, { type: 'bearer' })
+    .expect(200);
+  const side = lot.body.inspections[0].serverVerdict.characteristics.find(
+    (c: { characteristic: string }) => c.characteristic === 'side',
+  );
+  expect(side).toMatchObject({ status: 'within', measured: 80.1, lower: 79.5, upper: 80.5 });
+  expect(lot.body.inspections[0].measurements.dimensions).toEqual({ side: 80.1 });
+});
+
 test('a correction supersedes the current record once; a second record of a sample is refused', async () => {
   const { lotId, op } = lotOpen(t, r);
   const original = part(t, r, lotId, 1, 1.6);

@@ -80,6 +80,13 @@ describe('dimension, hardness and compression-set verdicts', () => {
     expect(diameter?.status).toBe('out');
   });
 
+  it('a dimension given as undefined is not measured, so another shape’s name does not fail', () => {
+    const verdict = partVerdict(prepared, {
+      dimensions: { diameter: 100.2, side: undefined, width: undefined },
+    });
+    expect(verdict.characteristics.map((c) => c.characteristic)).toEqual(['diameter', 'defects']);
+  });
+
   it('hardness by the median of the readings (REFERENCES §6)', () => {
     expect(only({ hardness: [66, 64, 67] }, 'hardness')?.reason).toBe(
       'hardness 66 Shore A (median of 3) is 6 points above the nominal 60 ± 5, over the upper limit 65',

@@ -238,7 +238,9 @@ function dimensionVerdicts(
   const measured: Partial<Record<DimensionName, number>> = { ...measurement.dimensions };
   if (measurement.thickness !== undefined) measured.thickness = measurement.thickness;
   const nominals = spec.geometry as unknown as Record<DimensionName, number>;
-  return (Object.keys(measured) as DimensionName[]).map((name) => {
+  // A key present but undefined (a decoded DTO has every field) was not measured.
+  const taken = (Object.keys(measured) as DimensionName[]).filter((n) => measured[n] !== undefined);
+  return taken.map((name) => {
     if (!names.includes(name)) {
       throw new EngineInputError(name, `is not a dimension of a ${spec.geometry.shape}`);
     }
