@@ -119,6 +119,26 @@ test('a record with its plan dimensions is applied and each dimension judged (IS
   expect(lot.body.inspections[0].measurements.dimensions).toEqual({ side: 80.1 });
 });
 
+test('a record id already stored, or used earlier in the batch, is refused; the first stays', async () => {
+  const { lotId, op } = lotOpen(t, r);
+  const first = part(t, r, lotId, 1);
+  expect(statuses((await t.push([op, first])).body)).toEqual(['applied', 'applied']);
+  const reused = part(t, r, lotId, 2, 1, { id: first.payload.id });
+  const fresh = part(t, r, lotId, 3);
+  const twice = part(t, r, lotId, 4, 1, { id: fresh.payload.id });
+  const { body } = await t.push([reused, fresh, twice]);
+  expect(statuses(body)).toEqual(['rejected', 'applied', 'rejected']);
+  expect(body.results[0]!.reason).toBe(
+    `id ${first.payload.id} is already the id of another record`,
+  );
+  const lot = await h
+    .http()
+    .get(`/api/lots/${lotId}`)
+    .auth(t.token, { type: 'bearer' })
+    .expect(200);
+  expect(lot.body.inspections.map((i: { sampleIndex: number }) => i.sampleIndex)).toEqual([1, 3]);
+});
+
 test('a correction supersedes the current record once; a second record of a sample is refused', async () => {
   const { lotId, op } = lotOpen(t, r);
   const original = part(t, r, lotId, 1, 1.6);

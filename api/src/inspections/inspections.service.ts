@@ -1,11 +1,12 @@
 import { Injectable } from '@nestjs/common';
+import { In, type EntityManager } from 'typeorm';
 import { auditRow } from '../audit/audit.service.js';
 import { insertRows } from '../database/insert-rows.js';
 import { partVerdict } from '../engine.js';
 import { currentInspections, LotsService } from '../lots/lots.service.js';
 import { SpecsService } from '../specs/specs.service.js';
 import type { DefectRecordPayload, InspectionRecordPayload } from '../sync/dto/operations.dto.js';
-import { OpRejected, type OpContext } from '../sync/op-context.js';
+import { OpRejected, type OpBatch, type OpContext } from '../sync/op-context.js';
 import { Defect } from './entities/defect.entity.js';
 import { Inspection } from './entities/inspection.entity.js';
 
@@ -16,11 +17,23 @@ export class InspectionsService {
     private readonly specs: SpecsService,
   ) {}
 
+  /** Reads once which of the ids a batch is about to record are stored already. */
+  async reserve(manager: EntityManager, batch: OpBatch, ids: string[]): Promise<void> {
+    if (ids.length === 0) return;
+    const stored = await manager.find(Inspection, { select: { id: true }, where: { id: In(ids) } });
+    for (const { id } of stored) batch.inspectionIds.add(id);
+  }
+
   /**
-   * `inspection.record`: stores one sampled part as sent, with the server's own verdict beside
-   * the device's. A sample is recorded once; a correction must name the record it replaces.
+   * `inspection.record`: checks one sampled part as sent and queues it, with the server's own
+   * verdict beside the device's, for `flush`. It writes nothing itself, so it needs no savepoint:
+   * every refusal comes before it changes the batch. A sample is recorded once; a correction must
+   * name the record it replaces.
    */
   async record(ctx: OpContext, p: InspectionRecordPayload): Promise<string> {
+    if (ctx.batch.inspectionIds.has(p.id)) {
+      throw new OpRejected(`id ${p.id} is already the id of another record`);
+    }
     const lot = await this.lots.openLot(ctx, p.lotId);
     if (p.sampleIndex > lot.plan.sampleSize) {
       throw new OpRejected(
@@ -55,7 +68,8 @@ export class InspectionsService {
       recordedAt: ctx.recordedAt,
       receivedAt: new Date(),
     };
-    await insertRows(ctx.manager, Inspection, [inspection]);
+    ctx.batch.inspections.push(inspection);
+    ctx.batch.inspectionIds.add(p.id);
     // The record itself never changes, so the audit names it rather than copying it.
     ctx.batch.audit.push(
       auditRow(ctx, 'inspection.record', 'inspection', p.id, null, {
@@ -67,6 +81,11 @@ export class InspectionsService {
     );
     samples.set(p.sampleIndex, p.id);
     return lot.id;
+  }
+
+  /** Writes the records `record` queued, in few statements. */
+  async flush(manager: EntityManager, batch: OpBatch): Promise<void> {
+    await insertRows(manager, Inspection, batch.inspections.splice(0));
   }
 
   /** `defect.record`: a visual defect, on a sampled part when it names its record. */

@@ -175,11 +175,7 @@ export class LotsService {
    */
   async recount(manager: EntityManager, lotId: string): Promise<void> {
     const lot = await manager.findOneByOrFail(Lot, { id: lotId });
-    const parts = await this.judgeParts(manager, lot);
-    const verdict = lotVerdict(
-      lot.plan,
-      parts.map((p) => p.verdict),
-    );
+    const verdict = lotVerdict(lot.plan, await this.standings(manager, lot));
     const serverVerdict: LotVerdict =
       verdict.decision === 'reject'
         ? 'flagged'
@@ -201,6 +197,25 @@ export class LotsService {
     }
     await this.feed.publish(manager, 'lot', lotId, after);
     if (newlyFlagged) await this.notifyFlagged(manager, after);
+  }
+
+  /**
+   * What the lot rule needs of each current sampled part. Without defects on its samples that is
+   * the stored `conforming` (the server's verdict of the measurements, which carry no defects),
+   * read without the records' bulky columns; otherwise each part is judged as in `judgeParts`.
+   */
+  private async standings(
+    manager: EntityManager,
+    lot: Lot,
+  ): Promise<Pick<PartVerdict, 'conforming' | 'criticalDefects'>[]> {
+    if (await manager.existsBy(Defect, { lotId: lot.id, inspectionId: Not(IsNull()) })) {
+      return (await this.judgeParts(manager, lot)).map((p) => p.verdict);
+    }
+    const all = await manager.find(Inspection, {
+      select: { id: true, sampleIndex: true, supersedesId: true, conforming: true },
+      where: { lotId: lot.id },
+    });
+    return currentInspections(all).map((i) => ({ conforming: i.conforming, criticalDefects: 0 }));
   }
 
   /**

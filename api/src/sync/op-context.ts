@@ -1,5 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import type { AuditRow } from '../audit/audit.service.js';
+import type { Inspection } from '../inspections/entities/inspection.entity.js';
 import type { Lot } from '../lots/entities/lot.entity.js';
 
 /**
@@ -12,6 +13,13 @@ export class OpBatch {
   readonly samples = new Map<string, Map<number, string>>();
   /** Audit entries of applied ops, written in bulk once the ops are done. */
   readonly audit: AuditRow[] = [];
+  /**
+   * Sampled-part records of applied ops, checked but not yet written: they go in bulk before the
+   * next op that writes on its own, and at the end of the batch.
+   */
+  readonly inspections: Inspection[] = [];
+  /** Inspection ids this batch may not use: stored already, or taken by an earlier op. */
+  readonly inspectionIds = new Set<string>();
 }
 
 /** Everything an operation handler needs besides its payload. */

@@ -29,6 +29,9 @@ export interface OpResult {
 // Devices keep their own clocks; allow a little drift before calling a time "in the future".
 const CLOCK_SLACK_MS = 5 * 60 * 1000;
 const AUTHOR_ROLES = new Set(['inspector', 'supervisor']);
+// Handlers that only queue their rows on the batch (written in bulk later) and refuse before they
+// queue anything: they need no savepoint of their own.
+const QUEUED = new Set<OperationType>(['inspection.record']);
 
 @Injectable()
 export class SyncService {
@@ -56,9 +59,10 @@ export class SyncService {
   }
 
   /**
-   * Applies a batch in one transaction, each operation in its own savepoint: a rejected one
-   * leaves nothing behind and the rest go on. Applied opIds are kept for good, so a retry of
-   * the same batch answers 'duplicate' for each and changes nothing. Then every lot the batch
+   * Applies a batch in one transaction, each operation that writes on its own in its own
+   * savepoint: a rejected one leaves nothing behind and the rest go on. Queued records are
+   * written before such an operation and at the end. Applied opIds are kept for good, so a retry
+   * of the same batch answers 'duplicate' for each and changes nothing. Then every lot the batch
    * touched is judged again.
    */
   async push(
@@ -78,6 +82,13 @@ export class SyncService {
       );
       const refusal = await this.authorRule(manager, operations, deviceId);
       const batch = new OpBatch();
+      await this.inspections.reserve(
+        manager,
+        batch,
+        operations
+          .filter((op, i) => op.type === 'inspection.record' && !problems[i] && !done.has(op.opId))
+          .map((op) => (op.payload as InspectionRecordPayload).id),
+      );
       const applied: AppliedOp[] = [];
       const touched = new Set<string>();
       const out: OpResult[] = [];
@@ -93,9 +104,11 @@ export class SyncService {
           continue;
         }
         const ctx: OpContext = { manager, authorId: op.authorId, deviceId, recordedAt, batch };
-        const outcome = await this.inSavepoint(manager, () =>
-          this.handlers[op.type](ctx, op.payload),
-        );
+        const apply = () => this.handlers[op.type](ctx, op.payload);
+        if (!QUEUED.has(op.type)) await this.inspections.flush(manager, batch);
+        const outcome = QUEUED.has(op.type)
+          ? await this.refusing(apply)
+          : await this.inSavepoint(manager, apply);
         if (typeof outcome === 'object') {
           out.push({ opId: op.opId, status: 'rejected', reason: outcome.reason });
           continue;
@@ -111,6 +124,7 @@ export class SyncService {
         });
         out.push({ opId: op.opId, status: 'applied' });
       }
+      await this.inspections.flush(manager, batch);
       await insertRows(manager, AppliedOp, applied);
       await this.audit.recordMany(manager, batch.audit);
       for (const lotId of touched) await this.lots.recount(manager, lotId);
@@ -158,10 +172,23 @@ export class SyncService {
       return lotId;
     } catch (error) {
       await runner.rollbackTransaction();
-      if (error instanceof OpRejected) return { reason: error.message };
-      const body = errorBody(error);
-      if (body.statusCode >= 500) this.logger.error(error);
-      return { reason: body.statusCode >= 500 ? 'the server could not apply it' : body.message };
+      return this.reasonOf(error);
     }
+  }
+
+  /** Runs one op that writes nothing itself; a failure comes back as the reason. */
+  private async refusing(apply: () => Promise<string>): Promise<string | { reason: string }> {
+    try {
+      return await apply();
+    } catch (error) {
+      return this.reasonOf(error);
+    }
+  }
+
+  private reasonOf(error: unknown): { reason: string } {
+    if (error instanceof OpRejected) return { reason: error.message };
+    const body = errorBody(error);
+    if (body.statusCode >= 500) this.logger.error(error);
+    return { reason: body.statusCode >= 500 ? 'the server could not apply it' : body.message };
   }
 }

@@ -46,8 +46,11 @@ export function mapDimensions<A, B>(
   f: (value: A, name: DimensionName) => B,
 ): GeometryOf<B> {
   const record = geometry as unknown as Record<DimensionName, A>;
-  const mapped = Object.fromEntries(dimensionNames(geometry).map((n) => [n, f(record[n], n)]));
-  return { ...mapped, shape: geometry.shape } as unknown as GeometryOf<B>;
+  const mapped: Record<string, unknown> = { shape: geometry.shape };
+  for (const name of DIMENSIONS[geometry.shape]) {
+    if (record[name] !== undefined) mapped[name] = f(record[name], name);
+  }
+  return mapped as unknown as GeometryOf<B>;
 }
 
 /** Throws EngineInputError unless every dimension is finite and positive and the shape holds together. */

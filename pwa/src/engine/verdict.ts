@@ -109,7 +109,9 @@ function classify(
 // Numbers as the inspector reads them: grouped thousands, decimals by unit.
 function formatNumber(value: number, decimals: number): string {
   const [whole = '', fraction] = Math.abs(value).toFixed(decimals).split('.');
-  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ' ');
+  // Groups of three from the right; a loop, as every verdict formats several numbers.
+  let grouped = whole.slice(0, ((whole.length - 1) % 3) + 1);
+  for (let i = grouped.length; i < whole.length; i += 3) grouped += ` ${whole.slice(i, i + 3)}`;
   return `${value < 0 ? '−' : ''}${grouped}${fraction ? `.${fraction}` : ''}`;
 }
 
@@ -411,7 +413,7 @@ export interface LotVerdict {
  */
 export function lotVerdict(
   plan: Pick<SamplingPlan, 'sampleSize' | 'accept' | 'reject'>,
-  parts: readonly PartVerdict[],
+  parts: readonly Pick<PartVerdict, 'conforming' | 'criticalDefects'>[],
 ): LotVerdict {
   const inspected = parts.length;
   const nonconforming = parts.filter((p) => !p.conforming).length;
