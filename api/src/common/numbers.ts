@@ -3,8 +3,8 @@ import { IsInt, Max, Min, ValidateBy, buildMessage } from 'class-validator';
 
 /**
  * A finite number (no NaN, no Infinity, no numeric string) within a physical range, both ends
- * included; `each` applies it to every item of an array. One check rather than three, because
- * a sync push validates thousands of these.
+ * included; `each` applies it to every item of an array. One check rather than three, so one
+ * message says all of it.
  */
 export const Finite = (min: number, max: number, each = false) =>
   ValidateBy(

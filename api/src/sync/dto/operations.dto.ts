@@ -1,169 +1,86 @@
-import { Type } from 'class-transformer';
-import {
-  IsBoolean,
-  IsIn,
-  IsISO8601,
-  IsString,
-  IsUUID,
-  Length,
-  Matches,
-  ValidateNested,
-  registerDecorator,
-  type ValidationOptions,
-  IsObject,
-} from 'class-validator';
-import { Finite, WholeNumber } from '../../common/numbers.js';
+import { z } from 'zod';
+import { finite, oneOf, record, timestamp, uuid, whole } from '../../common/schemas.js';
 import {
   DEFECT_LOCATIONS,
   DEFECT_SEVERITIES,
   DEFECT_TYPES,
 } from '../../inspections/entities/defect.entity.js';
-import { Measurements } from '../../inspections/dto/measurements.dto.js';
-import { Optional } from '../../common/optional.js';
+import { measurementsSchema } from '../../inspections/dto/measurements.dto.js';
 
-export class LotOpenPayload {
-  @IsUUID()
-  id: string;
+/* The payload of each operation type (sync/README.md "Operation types"). */
 
-  @IsString()
-  @Length(1, 40)
-  @Matches(/^[A-Za-z0-9._/-]+$/, {
-    message: 'lotNumber may hold letters, digits, dot, dash, slash and underscore',
-  })
-  lotNumber: string;
-
-  @IsUUID()
-  specRevisionId: string;
-
-  @IsUUID()
-  pressId: string;
-
-  @WholeNumber(1, 999)
-  cavity: number;
-
-  @WholeNumber(1, 1_000_000)
-  lotSize: number;
-
-  @IsISO8601({ strict: true })
-  moldedAt: string;
-}
+export const lotOpenPayload = record({
+  id: uuid(),
+  lotNumber: z
+    .string({ error: 'must be a text of 1 to 40 characters' })
+    .min(1, { error: 'must be a text of 1 to 40 characters' })
+    .max(40, { error: 'must be a text of 1 to 40 characters' })
+    .regex(/^[A-Za-z0-9._/-]+$/, {
+      error: 'may hold letters, digits, dot, dash, slash and underscore',
+    }),
+  specRevisionId: uuid(),
+  pressId: uuid(),
+  cavity: whole(1, 999),
+  lotSize: whole(1, 1_000_000),
+  moldedAt: timestamp(),
+});
+export type LotOpenPayload = z.infer<typeof lotOpenPayload>;
 
 const STATUSES = ['within', 'near', 'out'] as const;
-
-/** `{ load: 'within', thickness: 'near', … }`: one status per characteristic, up to 20. */
-function IsStatuses(options?: ValidationOptions) {
-  return (target: object, propertyName: string) =>
-    registerDecorator({
-      name: 'isStatuses',
-      target: target.constructor,
-      propertyName,
-      options: {
-        message: `${propertyName} must map up to 20 characteristic names to within, near or out`,
-        ...options,
-      },
-      validator: {
-        validate: (value: unknown) =>
-          typeof value === 'object' &&
-          value !== null &&
-          !Array.isArray(value) &&
-          Object.keys(value).length <= 20 &&
-          Object.entries(value).every(
-            ([name, status]) => /^[a-z][a-zA-Z-]{0,39}$/.test(name) && STATUSES.includes(status),
-          ),
-      },
-    });
-}
 
 /**
  * What the tablet showed for the part: the overall and per-characteristic status of the
  * engine's PartVerdict (its words and numbers follow from the measurements, so they stay home).
  */
-export class DeviceVerdictDto {
-  @IsIn(STATUSES)
-  status: (typeof STATUSES)[number];
+export const deviceVerdictSchema = record({
+  status: oneOf(STATUSES),
+  conforming: z.boolean({ error: 'must be true or false' }),
+  /** `{ load: 'within', thickness: 'near', … }`: one status per characteristic, up to 20. */
+  characteristics: z
+    .record(
+      z.string().regex(/^[a-z][a-zA-Z-]{0,39}$/, { error: 'is not a characteristic name' }),
+      oneOf(STATUSES),
+      { error: 'must map characteristic names to within, near or out' },
+    )
+    .refine((map) => Object.keys(map).length <= 20, { error: 'may name up to 20 characteristics' })
+    .optional(),
+});
+export type DeviceVerdictDto = z.infer<typeof deviceVerdictSchema>;
 
-  @IsBoolean()
-  conforming: boolean;
+export const inspectionRecordPayload = record({
+  id: uuid(),
+  lotId: uuid(),
+  sampleIndex: whole(1, 2000),
+  supersedes: uuid().optional(),
+  measurements: measurementsSchema,
+  deviceVerdict: deviceVerdictSchema,
+});
+export type InspectionRecordPayload = z.infer<typeof inspectionRecordPayload>;
 
-  // A map rather than a list of objects: validating nested objects is what a push spends on.
-  @Optional()
-  @IsStatuses()
-  characteristics?: Record<string, (typeof STATUSES)[number]>;
-}
+export const defectRecordPayload = record({
+  id: uuid(),
+  lotId: uuid(),
+  inspectionId: uuid().optional(),
+  type: oneOf(DEFECT_TYPES),
+  location: oneOf(DEFECT_LOCATIONS),
+  severity: oneOf(DEFECT_SEVERITIES),
+  sizeMm: finite(0.01, 3000).optional(),
+  note: z
+    .string({ error: 'must be a text of up to 1000 characters' })
+    .max(1000, { error: 'must be a text of up to 1000 characters' })
+    .optional(),
+  photoSha256: z
+    .string({ error: 'must be 64 lowercase hex digits' })
+    .regex(/^[0-9a-f]{64}$/, { error: 'must be 64 lowercase hex digits' })
+    .optional(),
+});
+export type DefectRecordPayload = z.infer<typeof defectRecordPayload>;
 
-export class InspectionRecordPayload {
-  @IsUUID()
-  id: string;
-
-  @IsUUID()
-  lotId: string;
-
-  @WholeNumber(1, 2000)
-  sampleIndex: number;
-
-  @Optional()
-  @IsUUID()
-  supersedes?: string;
-
-  @IsObject()
-  @ValidateNested()
-  @Type(() => Measurements)
-  measurements: Measurements;
-
-  @IsObject()
-  @ValidateNested()
-  @Type(() => DeviceVerdictDto)
-  deviceVerdict: DeviceVerdictDto;
-}
-
-export class DefectRecordPayload {
-  @IsUUID()
-  id: string;
-
-  @IsUUID()
-  lotId: string;
-
-  @Optional()
-  @IsUUID()
-  inspectionId?: string;
-
-  @IsIn(DEFECT_TYPES)
-  type: (typeof DEFECT_TYPES)[number];
-
-  @IsIn(DEFECT_LOCATIONS)
-  location: (typeof DEFECT_LOCATIONS)[number];
-
-  @IsIn(DEFECT_SEVERITIES)
-  severity: (typeof DEFECT_SEVERITIES)[number];
-
-  @Optional()
-  @Finite(0.01, 3000)
-  sizeMm?: number;
-
-  @Optional()
-  @IsString()
-  @Length(0, 1000)
-  note?: string;
-
-  @Optional()
-  @Matches(/^[0-9a-f]{64}$/, { message: 'photoSha256 must be 64 lowercase hex digits' })
-  photoSha256?: string;
-}
-
-export class DeviceLotVerdictDto {
-  @IsIn(['pass', 'flagged'])
-  verdict: 'pass' | 'flagged';
-
-  @WholeNumber(0, 2000)
-  nonconforming: number;
-}
-
-export class LotSubmitPayload {
-  @IsUUID()
-  lotId: string;
-
-  @IsObject()
-  @ValidateNested()
-  @Type(() => DeviceLotVerdictDto)
-  deviceVerdict: DeviceLotVerdictDto;
-}
+export const lotSubmitPayload = record({
+  lotId: uuid(),
+  deviceVerdict: record({
+    verdict: oneOf(['pass', 'flagged']),
+    nonconforming: whole(0, 2000),
+  }),
+});
+export type LotSubmitPayload = z.infer<typeof lotSubmitPayload>;

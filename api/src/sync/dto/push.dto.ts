@@ -1,51 +1,45 @@
-import { Type, type TypeHelpOptions } from 'class-transformer';
+import { z } from 'zod';
+import { record, timestamp, uuid } from '../../common/schemas.js';
 import {
-  ArrayMaxSize,
-  IsArray,
-  IsIn,
-  IsISO8601,
-  IsObject,
-  IsUUID,
-  ValidateNested,
-} from 'class-validator';
-import {
-  DefectRecordPayload,
-  InspectionRecordPayload,
-  LotOpenPayload,
-  LotSubmitPayload,
+  defectRecordPayload,
+  inspectionRecordPayload,
+  lotOpenPayload,
+  lotSubmitPayload,
 } from './operations.dto.js';
 
 export const PAYLOADS = {
-  'lot.open': LotOpenPayload,
-  'inspection.record': InspectionRecordPayload,
-  'defect.record': DefectRecordPayload,
-  'lot.submit': LotSubmitPayload,
+  'lot.open': lotOpenPayload,
+  'inspection.record': inspectionRecordPayload,
+  'defect.record': defectRecordPayload,
+  'lot.submit': lotSubmitPayload,
 };
 export type OperationType = keyof typeof PAYLOADS;
 
-/** Stands in for the payload of an unknown type, which is then reported by its `type`. */
-class UnknownPayload {}
+/**
+ * The envelope of a push. An operation's `type` and `payload` are checked one operation at a
+ * time (PushPipe), so that a bad one is rejected alone rather than failing the batch.
+ */
+export const pushSchema = record({
+  deviceId: uuid(),
+  operations: z
+    .array(
+      record({
+        opId: uuid(),
+        type: z.unknown().optional(),
+        authorId: uuid(),
+        recordedAt: timestamp(),
+        payload: z.unknown().optional(),
+      }),
+      { error: 'must be a list of operations' },
+    )
+    .max(500, { error: 'may hold up to 500 operations' }),
+});
 
-export class OperationDto {
-  @IsUUID()
+export interface OperationDto {
   opId: string;
-
-  @IsIn(Object.keys(PAYLOADS))
   type: OperationType;
-
-  @IsUUID()
   authorId: string;
-
-  @IsISO8601({ strict: true })
   recordedAt: string;
-
-  // Each payload takes the class of its operation's type (sync/README.md).
-  @IsObject()
-  @ValidateNested()
-  @Type((help?: TypeHelpOptions) => {
-    const type = (help?.object as { type?: unknown } | undefined)?.type;
-    return Object.hasOwn(PAYLOADS, String(type)) ? PAYLOADS[type as OperationType] : UnknownPayload;
-  })
   payload: object;
 }
 
@@ -57,15 +51,4 @@ export interface PushRequest {
   deviceId: string;
   operations: OperationDto[];
   problems: (string | undefined)[];
-}
-
-export class PushDto {
-  @IsUUID()
-  deviceId: string;
-
-  @IsArray()
-  @ArrayMaxSize(500)
-  @ValidateNested({ each: true })
-  @Type(() => OperationDto)
-  operations: OperationDto[];
 }
