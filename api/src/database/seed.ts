@@ -172,6 +172,7 @@ export class DemoSeed implements OnApplicationBootstrap {
         });
         const trouble = troubles[`${day}-${p}`] ?? 'none';
         await this.sampledParts(ctx, lotId, revision, trouble, next);
+        await this.inspections.flush(manager, ctx.batch);
         await this.lots.recount(manager, lotId);
         const judged = await manager.findOneByOrFail(Lot, { id: lotId });
         await this.lots.submit(ctx, {
