@@ -108,11 +108,12 @@ function classify(
 
 // Numbers as the inspector reads them: grouped thousands, decimals by unit.
 function formatNumber(value: number, decimals: number): string {
-  const [whole = '', fraction] = Math.abs(value).toFixed(decimals).split('.');
-  // Groups of three from the right; a loop, as every verdict formats several numbers.
-  let grouped = whole.slice(0, ((whole.length - 1) % 3) + 1);
-  for (let i = grouped.length; i < whole.length; i += 3) grouped += ` ${whole.slice(i, i + 3)}`;
-  return `${value < 0 ? '−' : ''}${grouped}${fraction ? `.${fraction}` : ''}`;
+  const text = Math.abs(value).toFixed(decimals);
+  const point = decimals > 0 ? text.length - decimals - 1 : text.length;
+  // Groups of three from the right, by slicing: every verdict formats a dozen numbers.
+  let grouped = text.slice(0, ((point - 1) % 3) + 1);
+  for (let i = grouped.length; i < point; i += 3) grouped += ` ${text.slice(i, i + 3)}`;
+  return `${value < 0 ? '−' : ''}${grouped}${text.slice(point)}`;
 }
 
 const DECIMALS: Record<NonNullable<CharacteristicVerdict['unit']>, (v: number) => number> = {
