@@ -219,7 +219,10 @@ describe('quality desk', () => {
     const part = onScreen(page).getByLabel('Part');
     const seeded = await part.locator('option').nth(1).getAttribute('value');
     if (seeded) await part.selectOption(seeded);
-    await page.waitForTimeout(500);
+    // The seeded week gives the chart its lots, all in one request to the trends route.
+    await onScreen(page)
+      .getByText(/^\d+ lots, \d+ parts each/)
+      .waitFor();
     await screenshot(page, 'desk-trends');
     await onScreen(page).getByRole('region', { name: 'Capability' }).scrollIntoViewIfNeeded();
     await screenshot(page, 'desk-trends-capability');

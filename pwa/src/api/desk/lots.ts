@@ -1,8 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
-import type { Lot, LotDetail, Press } from '../types';
+import type { Lot, Press } from '../types';
 import { deskKey, useDeskCall } from './call';
-import { measurementRows } from './measurementRows';
-import type { LotReport } from './types';
+import type { LotReport, MeasurementRow } from './types';
 
 export interface LotFilter {
   specId?: string;
@@ -58,40 +57,15 @@ export interface MeasurementFilter {
   cavity?: number;
 }
 
-/** Lots are fetched a few at a time: enough to be quick, few enough not to crowd the server. */
-const PARALLEL_LOTS = 6;
-
-async function inBatches<T, R>(
-  items: T[],
-  size: number,
-  run: (item: T) => Promise<R>,
-): Promise<R[]> {
-  const out: R[] = [];
-  for (let i = 0; i < items.length; i += size)
-    out.push(...(await Promise.all(items.slice(i, i + size).map(run))));
-  return out;
-}
-
 /**
  * Every current (not superseded) sampled part of a part spec's lots, one row each, for the
- * trend charts; built from the lot routes, newest 1000 lots at most.
+ * trend charts: one request, the server picks the current records (newest 1000 lots at most).
  */
 export function useMeasurements(specId: string | undefined, filter: MeasurementFilter) {
   const { call, ready } = useDeskCall();
   return useQuery({
     queryKey: deskKey('measurements', specId, filter),
-    queryFn: async () => {
-      const { cavity, ...server } = filter;
-      const [lots, presses] = await Promise.all([
-        call<Lot[]>(`/lots${query({ specId, ...server, limit: 1000 })}`),
-        call<Press[]>('/presses'),
-      ]);
-      const wanted = lots.filter((lot) => cavity === undefined || lot.cavity === cavity);
-      const details = await inBatches(wanted, PARALLEL_LOTS, (lot) =>
-        call<LotDetail>(`/lots/${lot.id}`),
-      );
-      return measurementRows(details, presses);
-    },
+    queryFn: () => call<MeasurementRow[]>(`/trends/measurements${query({ specId, ...filter })}`),
     enabled: ready && !!specId,
   });
 }
