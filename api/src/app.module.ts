@@ -15,6 +15,7 @@ import { PressesModule } from './presses/presses.module.js';
 import { ReportsModule } from './reports/reports.module.js';
 import { SpecsModule } from './specs/specs.module.js';
 import { SyncModule } from './sync/sync.module.js';
+import { TrendsModule } from './trends/trends.module.js';
 import { UsersModule } from './users/users.module.js';
 
 @Module({})
@@ -37,6 +38,7 @@ export class AppModule {
         InspectionsModule,
         SyncModule,
         ReportsModule,
+        TrendsModule,
         PhotosModule,
         HealthModule,
         SeedModule,

@@ -42,6 +42,7 @@ const EXPECTED: Record<string, 'public' | readonly Role[]> = {
   'POST /api/lots/:id/reopen': ['supervisor'],
   'GET /api/lots/:id/report': ['supervisor', 'quality'],
   'GET /api/lots/:id/report.csv': ['supervisor', 'quality'],
+  'GET /api/trends/measurements': ['supervisor', 'quality'],
   'POST /api/sync/push': ['inspector', 'supervisor'],
   'GET /api/sync/pull': ANY,
   'PUT /api/photos/:sha256': ['inspector', 'supervisor', 'quality'],
