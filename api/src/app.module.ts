@@ -6,6 +6,7 @@ import { CompoundsModule } from './compounds/compounds.module.js';
 import { CONFIG, type Config } from './config.js';
 import { DatabaseModule } from './database/database.module.js';
 import { SeedModule } from './database/seed.js';
+import { DevicesModule } from './devices/devices.module.js';
 import { HealthModule } from './health/health.module.js';
 import { InspectionsModule } from './inspections/inspections.module.js';
 import { LotsModule } from './lots/lots.module.js';
@@ -31,6 +32,7 @@ export class AppModule {
         MailModule,
         AuthModule.forRoot(jwtSecret),
         UsersModule,
+        DevicesModule,
         PressesModule,
         CompoundsModule,
         SpecsModule,

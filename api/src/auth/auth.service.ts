@@ -136,23 +136,32 @@ export class AuthService {
     return byUser;
   }
 
-  private async revoke(manager: EntityManager, session: Session, reason: string): Promise<void> {
+  /**
+   * Ends every sign-in on a device that is lost or stolen. Sign-ins already past their refresh
+   * expiry are ended too: one never ended would go on vouching for work said to be recorded on
+   * that device. Returns how many were ended.
+   */
+  async revokeDevice(manager: EntityManager, actorId: string, deviceId: string): Promise<number> {
+    const open = await manager.findBy(Session, { deviceId, revokedAt: IsNull() });
+    for (const session of open) await this.revoke(manager, session, 'device-revoked', actorId);
+    return open.length;
+  }
+
+  /** `actorId` is whoever ended the sign-in; by default its own person. */
+  private async revoke(
+    manager: EntityManager,
+    session: Session,
+    reason: string,
+    actorId = session.userId,
+  ): Promise<void> {
     await manager.update(
       Session,
       { id: session.id },
       { revokedAt: new Date(), revokeReason: reason },
     );
-    await this.audit.record(
-      manager,
-      session.userId,
-      `auth.${reason}`,
-      'session',
-      session.id,
-      null,
-      {
-        revokeReason: reason,
-      },
-    );
+    await this.audit.record(manager, actorId, `auth.${reason}`, 'session', session.id, null, {
+      revokeReason: reason,
+    });
   }
 
   private async issue(

@@ -26,7 +26,10 @@ export class Session {
   @Column({ type: Date, nullable: true })
   revokedAt: Date | null;
 
-  /** 'logout', 'reuse' (a spent refresh token came back), 'deactivated'. */
+  /**
+   * 'logout', 'reuse' (a spent refresh token came back), 'deactivated', 'device-revoked' (an
+   * administrator signed the device out).
+   */
   @Column({ type: 'varchar', length: 16, nullable: true })
   revokeReason: string | null;
 }
