@@ -8,6 +8,7 @@ import {
   flaskOutline,
   mailOutline,
   peopleOutline,
+  tabletLandscapeOutline,
 } from 'ionicons/icons';
 import type { Role } from './api/types';
 import { BoardPage } from './pages/inspect/BoardPage';
@@ -115,6 +116,11 @@ const adminRoutes: AppRoute[] = [
     page: lazyPage(ADMIN, () => import('./pages/admin/PressesPage'), 'PressesPage'),
   },
   {
+    path: '/admin/devices',
+    roles: ADMIN,
+    page: lazyPage(ADMIN, () => import('./pages/admin/DevicesPage'), 'DevicesPage'),
+  },
+  {
     path: '/admin/mail',
     roles: ADMIN,
     page: lazyPage(ADMIN, () => import('./pages/admin/MailPage'), 'MailPage'),
@@ -156,6 +162,13 @@ const NAV: readonly NavEntry[] = [
     roles: ADMIN,
     label: 'Presses',
     icon: constructOutline,
+    section: 'Administration',
+  },
+  {
+    path: '/admin/devices',
+    roles: ADMIN,
+    label: 'Devices',
+    icon: tabletLandscapeOutline,
     section: 'Administration',
   },
   {

@@ -1,7 +1,7 @@
 /** Server data for the administrator's pages (TanStack Query). */
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useDeskCall } from './desk/call';
-import type { MailMessage, Press, PressKind, Role, User } from './types';
+import type { Device, DeviceRevoked, MailMessage, Press, PressKind, Role, User } from './types';
 
 const adminKey = (...parts: unknown[]) => ['admin', ...parts] as const;
 
@@ -88,4 +88,21 @@ export function useMail() {
     enabled: ready,
     refetchInterval: 30_000,
   });
+}
+
+export function useDevices() {
+  const { call, ready } = useDeskCall();
+  return useQuery({
+    queryKey: adminKey('devices'),
+    queryFn: () => call<Device[]>('/admin/devices'),
+    enabled: ready,
+  });
+}
+
+/** Ends every sign-in on a lost or stolen tablet. */
+export function useRevokeDevice() {
+  const { call } = useDeskCall();
+  return useAdminWrite('devices', (deviceId: string) =>
+    call<DeviceRevoked>(`/admin/devices/${deviceId}/revoke`, { method: 'POST' }),
+  );
 }

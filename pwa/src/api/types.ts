@@ -191,6 +191,23 @@ export interface MailMessage {
   text: string;
 }
 
+/** A tablet or browser as the server knows it: by the id given at sign-in and on pushes. */
+export interface Device {
+  deviceId: string;
+  /** Who signed in on it, the latest first. */
+  people: { userId: string; name: string; email: string }[];
+  firstSeenAt: string;
+  lastSignInAt: string;
+  lastPushAt: string | null;
+  appliedOps: number;
+  activeSessions: number;
+}
+
+export interface DeviceRevoked {
+  deviceId: string;
+  revoked: number;
+}
+
 export type PulledKind = 'press' | 'compound' | 'fit' | 'spec' | 'lot' | 'disposition';
 
 export interface PulledChange {
