@@ -378,6 +378,14 @@ const CASES: Case[] = [
     ],
   },
   {
+    name: 'TestMailDto',
+    role: 'admin',
+    method: 'post',
+    path: () => '/api/admin/mail/test',
+    valid: () => ({ to: 'someone@demo.test' }),
+    fields: [{ path: 'to', kind: 'email' }],
+  },
+  {
     name: 'ReopenDto',
     role: 'supervisor',
     method: 'post',

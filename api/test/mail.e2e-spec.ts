@@ -67,3 +67,46 @@ test('a critical defect on a sampled part flags the lot and mails once', async (
   expect(lot.body.verdictReason).toMatch(/critical defect/);
   expect(await settled(lotNumber)).toHaveLength(1);
 });
+
+test('the settings say where mail goes and who gets flagged lots, without credentials', async () => {
+  const res = await h
+    .http()
+    .get('/api/admin/mail/settings')
+    .auth(admin, { type: 'bearer' })
+    .expect(200);
+  expect(res.body).toMatchObject({
+    transport: 'local',
+    flaggedLotRecipients: ['supervisor@demo.test'],
+  });
+  expect(res.body.server).toMatch(/^smtp:\/\/127\.0\.0\.1:\d+$/);
+  expect(res.body.queue).toEqual({
+    sent: expect.any(Number),
+    waiting: expect.any(Number),
+    failed: 0,
+  });
+});
+
+test('a test message goes through the real SMTP conversation to the local server, audited', async () => {
+  await h
+    .http()
+    .post('/api/admin/mail/test')
+    .auth(admin, { type: 'bearer' })
+    .send({ to: 'someone@demo.test' })
+    .expect(202);
+  const mail = await settled('Gumshoe test message');
+  expect(mail.map((m) => m.to)).toEqual(['someone@demo.test']);
+  const audit = await h
+    .http()
+    .get('/api/audit?entity=mail')
+    .auth(admin, { type: 'bearer' })
+    .expect(200);
+  expect(audit.body[0]).toMatchObject({ action: 'mail.test', after: { to: 'someone@demo.test' } });
+  for (const body of [{}, { to: 'not an address' }, { to: 'a@b.test', cc: 'x' }]) {
+    const bad = await h
+      .http()
+      .post('/api/admin/mail/test')
+      .auth(admin, { type: 'bearer' })
+      .send(body);
+    expect(bad.status).toBe(400);
+  }
+});

@@ -49,6 +49,8 @@ const EXPECTED: Record<string, 'public' | readonly Role[]> = {
   'GET /api/photos/:sha256': ANY,
   'GET /api/audit': ['admin', 'quality'],
   'GET /api/admin/mail': ['admin'],
+  'GET /api/admin/mail/settings': ['admin'],
+  'POST /api/admin/mail/test': ['admin'],
   'GET /api/admin/devices': ['admin'],
   'POST /api/admin/devices/:deviceId/revoke': ['admin'],
 };

@@ -259,6 +259,11 @@ describe('at the press and on the shift', () => {
     await shot(admin, 'admin-presses');
     await admin.goto(`${baseUrl}/admin/mail`);
     await screen(admin).getByTestId('mail-list').waitFor();
+    await screen(admin).getByTestId('mail-settings').getByText('supervisor@demo.test').waitFor();
+    // A test message goes out through SMTP to the local server and shows in the list.
+    await screen(admin).getByLabel('Send a test message to').fill('admin@demo.test');
+    await screen(admin).getByRole('button', { name: 'Send test message' }).click();
+    await screen(admin).getByText('Gumshoe test message').waitFor();
     await shot(admin, 'admin-mail');
 
     const { page, context } = tablet;

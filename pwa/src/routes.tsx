@@ -174,7 +174,7 @@ const NAV: readonly NavEntry[] = [
   {
     path: '/admin/mail',
     roles: ADMIN,
-    label: 'Mail outbox',
+    label: 'Mail',
     icon: mailOutline,
     section: 'Administration',
   },

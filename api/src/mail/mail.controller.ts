@@ -1,14 +1,33 @@
-import { Controller, Get } from '@nestjs/common';
-import { Roles } from '../auth/access.js';
-import { MailService, type KeptMessage } from './mail.service.js';
+import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
+import { DataSource } from 'typeorm';
+import { Roles, type AuthUser } from '../auth/access.js';
+import { CurrentUser } from '../auth/current-user.decorator.js';
+import { TestMailDto } from './dto/test-mail.dto.js';
+import { MailService, type KeptMessage, type MailSettings } from './mail.service.js';
 
 @Controller('admin/mail')
+@Roles('admin')
 export class MailController {
-  constructor(private readonly mail: MailService) {}
+  constructor(
+    private readonly mail: MailService,
+    private readonly dataSource: DataSource,
+  ) {}
 
   @Get()
-  @Roles('admin')
   list(): Promise<KeptMessage[]> {
     return this.mail.kept();
+  }
+
+  @Get('settings')
+  settings(): Promise<MailSettings> {
+    return this.mail.settings(this.dataSource.manager);
+  }
+
+  /** Sends one message now; its outcome shows in the queue counts (and, locally, in the list). */
+  @Post('test')
+  @HttpCode(202)
+  async test(@CurrentUser() actor: AuthUser, @Body() body: TestMailDto): Promise<{ queued: true }> {
+    await this.mail.sendTest(actor.id, body.to);
+    return { queued: true };
   }
 }

@@ -11,9 +11,11 @@ import {
 } from '@nestjs/common';
 import { simpleParser } from 'mailparser';
 import nodemailer, { type Transporter } from 'nodemailer';
-import { IsNull, LessThan, type EntityManager } from 'typeorm';
+import { IsNull, LessThan, MoreThanOrEqual, Not, type EntityManager } from 'typeorm';
+import { AuditService } from '../audit/audit.service.js';
 import { CONFIG, type Config } from '../config.js';
 import { Transactions } from '../database/transactions.js';
+import { User } from '../users/entities/user.entity.js';
 import { OutgoingMail } from './entities/outgoing-mail.entity.js';
 import { FakeSmtp } from './fake-smtp.js';
 
@@ -29,6 +31,17 @@ export interface KeptMessage {
   text: string;
 }
 
+/** Where mail goes and how it is doing, for the administrator; no credentials ever shown. */
+export interface MailSettings {
+  transport: 'local' | 'smtp';
+  /** The SMTP server, without user or password. */
+  server: string;
+  from: string;
+  /** Who is mailed when the server flags a lot: the active supervisors. */
+  flaggedLotRecipients: string[];
+  queue: { sent: number; waiting: number; failed: number };
+}
+
 export function mailFolder(dataDir: string): string {
   return join(dataDir, 'mail');
 }
@@ -37,12 +50,14 @@ export function mailFolder(dataDir: string): string {
 export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModuleDestroy {
   private readonly logger = new Logger('Mail');
   private fake: FakeSmtp | undefined;
+  private fakePort: number | undefined;
   private transport: Transporter | undefined;
   private sending: Promise<void> = Promise.resolve();
 
   constructor(
     @Inject(CONFIG) private readonly config: Config,
     private readonly transactions: Transactions,
+    private readonly audit: AuditService,
   ) {}
 
   async onModuleInit(): Promise<void> {
@@ -52,6 +67,7 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
     }
     this.fake = new FakeSmtp(mailFolder(this.config.dataDir));
     const port = await this.fake.listen();
+    this.fakePort = port;
     this.transport = nodemailer.createTransport({
       host: '127.0.0.1',
       port,
@@ -131,6 +147,44 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
     }
   }
 
+  async settings(manager: EntityManager): Promise<MailSettings> {
+    const [supervisors, sent, waiting, failed] = await Promise.all([
+      manager.find(User, {
+        select: { email: true },
+        where: { role: 'supervisor', active: true },
+        order: { email: 'ASC' },
+      }),
+      manager.countBy(OutgoingMail, { sentAt: Not(IsNull()) }),
+      manager.countBy(OutgoingMail, { sentAt: IsNull(), attempts: LessThan(MAX_ATTEMPTS) }),
+      manager.countBy(OutgoingMail, { sentAt: IsNull(), attempts: MoreThanOrEqual(MAX_ATTEMPTS) }),
+    ]);
+    return {
+      transport: this.fake ? 'local' : 'smtp',
+      server: this.fake
+        ? `smtp://127.0.0.1:${this.fakePort}`
+        : withoutCredentials(this.config.smtpUrl!),
+      from: FROM,
+      flaggedLotRecipients: supervisors.map((s) => s.email),
+      queue: { sent, waiting, failed },
+    };
+  }
+
+  /** A message that only proves delivery works; each one is new, so none is held back as a repeat. */
+  async sendTest(actorId: string, to: string): Promise<void> {
+    const key = `test:${randomUUID()}`;
+    await this.transactions.run(async (manager) => {
+      await this.enqueue(
+        manager,
+        key,
+        [to],
+        'Gumshoe test message',
+        'This message was sent from the plant server to check that its mail reaches you. No action is needed.',
+      );
+      await this.audit.record(manager, actorId, 'mail.test', 'mail', key, null, { to });
+    });
+    await this.flush();
+  }
+
   /** The messages the local mail server kept, newest first. */
   async kept(): Promise<KeptMessage[]> {
     const folder = mailFolder(this.config.dataDir);
@@ -154,5 +208,16 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
         };
       }),
     );
+  }
+}
+
+function withoutCredentials(url: string): string {
+  try {
+    const parsed = new URL(url);
+    parsed.username = '';
+    parsed.password = '';
+    return parsed.toString();
+  } catch {
+    return 'the server in SMTP_URL (not a URL that can be shown)';
   }
 }

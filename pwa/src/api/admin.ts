@@ -1,7 +1,16 @@
 /** Server data for the administrator's pages (TanStack Query). */
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useDeskCall } from './desk/call';
-import type { Device, DeviceRevoked, MailMessage, Press, PressKind, Role, User } from './types';
+import type {
+  Device,
+  DeviceRevoked,
+  MailMessage,
+  MailSettings,
+  Press,
+  PressKind,
+  Role,
+  User,
+} from './types';
 
 const adminKey = (...parts: unknown[]) => ['admin', ...parts] as const;
 
@@ -88,6 +97,24 @@ export function useMail() {
     enabled: ready,
     refetchInterval: 30_000,
   });
+}
+
+export function useMailSettings() {
+  const { call, ready } = useDeskCall();
+  return useQuery({
+    queryKey: adminKey('mail', 'settings'),
+    queryFn: () => call<MailSettings>('/admin/mail/settings'),
+    enabled: ready,
+    refetchInterval: 30_000,
+  });
+}
+
+/** One test message; the mail list and the queue counts are read again after it. */
+export function useSendTestMail() {
+  const { call } = useDeskCall();
+  return useAdminWrite('mail', (to: string) =>
+    call<{ queued: true }>('/admin/mail/test', { method: 'POST', body: { to } }),
+  );
 }
 
 export function useDevices() {

@@ -182,6 +182,15 @@ export interface LotDetail extends Lot {
   dispositions: Disposition[];
 }
 
+/** GET /admin/mail/settings (api/src/ROUTES.md). */
+export interface MailSettings {
+  transport: 'local' | 'smtp';
+  server: string;
+  from: string;
+  flaggedLotRecipients: string[];
+  queue: { sent: number; waiting: number; failed: number };
+}
+
 export interface MailMessage {
   id: string;
   date: string;
