@@ -105,8 +105,9 @@ export class SyncService {
         }
         const ctx: OpContext = { manager, authorId: op.authorId, deviceId, recordedAt, batch };
         const apply = () => this.handlers[op.type](ctx, op.payload);
-        if (!QUEUED.has(op.type)) await this.inspections.flush(manager, batch);
-        const outcome = QUEUED.has(op.type)
+        const queued = QUEUED.has(op.type);
+        if (!queued) await this.inspections.flush(manager, batch);
+        const outcome = queued
           ? await this.refusing(apply)
           : await this.inSavepoint(manager, apply);
         if (typeof outcome === 'object') {
