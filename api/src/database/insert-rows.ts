@@ -8,7 +8,6 @@ interface Plan {
   /** The statement for n rows, made once per row count. */
   sql: Map<number, string>;
   head: string;
-  row: string;
 }
 const plans = new WeakMap<object, Plan>();
 
@@ -24,23 +23,26 @@ export async function insertRows<T extends ObjectLiteral>(
   rows: T[],
 ): Promise<void> {
   const metadata = manager.connection.getMetadata(entity);
+  const { driver } = manager.connection;
   let plan = plans.get(metadata);
   if (!plan) {
     const columns = metadata.columns.filter((c) => c.isInsert && !c.isGenerated && !c.isVirtual);
     plan = {
       columns,
       sql: new Map(),
-      head: `INSERT INTO "${metadata.tablePath}"(${columns.map((c) => `"${c.databaseName}"`).join(', ')}) VALUES `,
-      row: `(${columns.map(() => '?').join(', ')})`,
+      head: `INSERT INTO ${driver.escape(metadata.tablePath)}(${columns.map((c) => driver.escape(c.databaseName)).join(', ')}) VALUES `,
     };
     plans.set(metadata, plan);
   }
-  const driver = manager.connection.driver;
   for (let i = 0; i < rows.length; i += ROWS_PER_STATEMENT) {
     const chunk = rows.slice(i, i + ROWS_PER_STATEMENT);
     let sql = plan.sql.get(chunk.length);
     if (!sql) {
-      sql = plan.head + Array.from(chunk, () => plan.row).join(', ');
+      // Placeholders from the driver: `?` on SQLite, `$1, $2, …` on PostgreSQL.
+      const width = plan.columns.length;
+      const row = (r: number) =>
+        `(${plan.columns.map((_, c) => driver.createParameter(`p${r * width + c}`, r * width + c)).join(', ')})`;
+      sql = plan.head + Array.from(chunk, (_, r) => row(r)).join(', ');
       plan.sql.set(chunk.length, sql);
     }
     const values: unknown[] = [];

@@ -1,7 +1,8 @@
 import { Injectable } from '@nestjs/common';
-import { In, type EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { auditRow } from '../audit/audit.service.js';
 import { insertRows } from '../database/insert-rows.js';
+import { storedKeys } from '../database/stored-keys.js';
 import { partVerdict } from '../engine.js';
 import { currentInspections, LotsService } from '../lots/lots.service.js';
 import { SpecsService } from '../specs/specs.service.js';
@@ -19,9 +20,7 @@ export class InspectionsService {
 
   /** Reads once which of the ids a batch is about to record are stored already. */
   async reserve(manager: EntityManager, batch: OpBatch, ids: string[]): Promise<void> {
-    if (ids.length === 0) return;
-    const stored = await manager.find(Inspection, { select: { id: true }, where: { id: In(ids) } });
-    for (const { id } of stored) batch.inspectionIds.add(id);
+    for (const id of await storedKeys(manager, Inspection, 'id', ids)) batch.inspectionIds.add(id);
   }
 
   /**

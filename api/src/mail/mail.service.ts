@@ -53,6 +53,8 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
   private fakePort: number | undefined;
   private transport: Transporter | undefined;
   private sending: Promise<void> = Promise.resolve();
+  /** Something may be waiting: mail was queued, or a send failed, since the queue was last read. */
+  private unsent = true;
 
   constructor(
     @Inject(CONFIG) private readonly config: Config,
@@ -92,6 +94,7 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
    * dropped: that is what makes "lot flagged" mail go out once, however often the lot is pushed.
    */
   async enqueue(manager: EntityManager, key: string, to: string[], subject: string, text: string) {
+    this.unsent = true;
     await manager
       .createQueryBuilder()
       .insert()
@@ -116,6 +119,9 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
   }
 
   private async sendPending(): Promise<void> {
+    // Every sync push calls flush; most queue nothing, and then there is nothing to read.
+    if (!this.unsent) return;
+    this.unsent = false;
     // Read and marked in the writers' queue: on the shared connection a plain read could see the
     // mail of a transaction that has not committed (and may yet roll back).
     const pending = await this.transactions.run((manager) =>
@@ -139,6 +145,7 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
       } catch (error) {
         const lastError = String((error as Error).message).slice(0, 500);
         this.logger.warn(`Could not send "${mail.subject}": ${lastError}`);
+        this.unsent = true;
         const failed = { attempts: mail.attempts + 1, lastError };
         await this.transactions.run((manager) =>
           manager.update(OutgoingMail, { id: mail.id }, failed),

@@ -5,6 +5,7 @@ import { AuditService } from '../audit/audit.service.js';
 import { AuthService, vouchesFor } from '../auth/auth.service.js';
 import { errorBody } from '../common/error.filter.js';
 import { insertRows } from '../database/insert-rows.js';
+import { storedKeys } from '../database/stored-keys.js';
 import { Transactions } from '../database/transactions.js';
 import { InspectionsService } from '../inspections/inspections.service.js';
 import { LotsService } from '../lots/lots.service.js';
@@ -75,10 +76,11 @@ export class SyncService {
       );
     }
     const results = await this.transactions.run(async (manager) => {
-      const done = new Set(
-        (await manager.findBy(AppliedOp, { opId: In(operations.map((op) => op.opId)) })).map(
-          (a) => a.opId,
-        ),
+      const done = await storedKeys(
+        manager,
+        AppliedOp,
+        'opId',
+        operations.map((op) => op.opId),
       );
       const refusal = await this.authorRule(manager, operations, deviceId);
       const batch = new OpBatch();
