@@ -1,6 +1,7 @@
 import type { PulledSpec } from '../../api/types';
 import type { LocalLot } from '../../offline/records';
 import { usePresses } from '../../offline/catalog';
+import { Facts } from '../Facts';
 
 export function LotFacts({ lot, spec }: { lot: LocalLot; spec: PulledSpec | undefined }) {
   const press = usePresses()?.find((p) => p.id === lot.pressId);
@@ -12,14 +13,5 @@ export function LotFacts({ lot, spec }: { lot: LocalLot; spec: PulledSpec | unde
     ['Lot size', String(lot.lotSize)],
     ['Molded', new Date(lot.moldedAt).toLocaleDateString()],
   ];
-  return (
-    <dl className="facts">
-      {facts.map(([term, value]) => (
-        <div key={term}>
-          <dt>{term}</dt>
-          <dd>{value}</dd>
-        </div>
-      ))}
-    </dl>
-  );
+  return <Facts facts={facts} />;
 }

@@ -3,6 +3,7 @@ import { useForm } from 'react-hook-form';
 import { useMail, useMailSettings, useSendTestMail } from '../../api/admin';
 import type { MailSettings } from '../../api/types';
 import { QueryState } from '../../components/desk/QueryState';
+import { Facts } from '../../components/Facts';
 import { Field } from '../../components/Field';
 import { Screen } from '../../components/Screen';
 import { when } from '../../components/time';
@@ -24,16 +25,7 @@ function SettingsCard({ settings }: { settings: MailSettings }) {
     ],
     ['Messages', `${sent} sent, ${waiting} waiting, ${failed} given up after repeated failures`],
   ];
-  return (
-    <dl className="facts" data-testid="mail-settings">
-      {facts.map(([term, value]) => (
-        <div key={term}>
-          <dt>{term}</dt>
-          <dd>{value}</dd>
-        </div>
-      ))}
-    </dl>
-  );
+  return <Facts facts={facts} testId="mail-settings" />;
 }
 
 function TestMailForm() {
