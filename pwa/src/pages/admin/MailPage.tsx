@@ -15,7 +15,7 @@ function SettingsCard({ settings }: { settings: MailSettings }) {
     [
       'Mail server',
       settings.transport === 'local'
-        ? `the plant server's own local one (${settings.server}); set SMTP_URL for the plant's`
+        ? `local, run by the plant server (${settings.server}); set SMTP_URL to send through the plant's own`
         : settings.server,
     ],
     ['Sent as', settings.from],
