@@ -109,6 +109,11 @@ export async function setMeta(key: string, value: unknown): Promise<void> {
   await db.meta.put({ key, value });
 }
 
+/** How people name a device: short enough to read off the tablet's Sending page. */
+export function tabletName(deviceId: string): string {
+  return `Tablet ${deviceId.slice(0, 8)}`;
+}
+
 /** A stable id for this browser profile, sent with every push. */
 export async function deviceId(): Promise<string> {
   return db.transaction('rw', db.meta, async () => {

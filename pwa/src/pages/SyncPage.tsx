@@ -4,7 +4,7 @@ import { useEffect, useState } from 'react';
 import { Screen } from '../components/Screen';
 import { when } from '../components/time';
 import { describeOp } from '../inspect/describeOp';
-import { db } from '../offline/db';
+import { db, getMeta, tabletName } from '../offline/db';
 import { sendAgain } from '../offline/outbox';
 import { requestPersistentStorage } from '../offline/persist';
 import { useSyncState } from '../offline/useSyncState';
@@ -28,6 +28,7 @@ export function SyncPage() {
     [],
   );
   const people = useLiveQuery(() => db.people.toArray(), []);
+  const device = useLiveQuery(() => getMeta<string>('deviceId'));
   const nameOf = (userId: string) => people?.find((p) => p.userId === userId)?.name ?? userId;
 
   return (
@@ -39,6 +40,7 @@ export function SyncPage() {
         {persisted === false &&
           'The browser has not promised to keep this storage: send your work soon.'}
         {persisted && 'The browser keeps this storage even when space runs low.'}
+        {device && ` The administrator sees this tablet as ${tabletName(device)}.`}
       </p>
       {state?.status?.error && (
         <p className="field-error" role="alert">

@@ -5,13 +5,13 @@ import type { Device } from '../../api/types';
 import { QueryState } from '../../components/desk/QueryState';
 import { Screen } from '../../components/Screen';
 import { when } from '../../components/time';
-import { getMeta } from '../../offline/db';
+import { getMeta, tabletName } from '../../offline/db';
 import { describeSyncError } from '../../offline/sync';
 
 function DeviceRow({ device, mine }: { device: Device; mine: boolean }) {
   const revoke = useRevokeDevice();
   const [confirm] = useIonAlert();
-  const label = mine ? 'This device' : `Tablet ${device.deviceId.slice(0, 8)}`;
+  const label = mine ? 'This device' : tabletName(device.deviceId);
   const ask = () =>
     void confirm({
       header: mine ? 'Sign out the device you are using?' : `Sign out ${label}?`,
