@@ -11,6 +11,7 @@ import { createServer, type AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
+import { v7 as recordId } from 'uuid';
 import { partVerdict, prepareSpec, type PartSpec } from '../src/engine.js';
 import { deviceVerdictOf } from '../src/sync/device-verdict.js';
 
@@ -55,6 +56,7 @@ async function call<T>(method: string, path: string, token?: string, body?: unkn
   return (await res.json()) as T;
 }
 
+// Ids as the tablet makes them (pwa/src/offline/recordId.ts): UUIDv7 for records and ops.
 const deviceId = randomUUID();
 const session = await call<{ accessToken: string; user: { id: string } }>(
   'POST',
@@ -85,7 +87,7 @@ const push = (operations: Op[]) =>
     operations,
   });
 const op = (type: string, payload: object): Op => ({
-  opId: randomUUID(),
+  opId: recordId(),
   type,
   authorId,
   recordedAt: new Date().toISOString(),
@@ -100,7 +102,7 @@ async function pushBodies(
   records: number,
   prefix: string,
 ): Promise<{ lotIds: string[]; opIds: string[]; bodies: string[] }> {
-  const lotIds = Array.from({ length: records / BATCH }, () => randomUUID());
+  const lotIds = Array.from({ length: records / BATCH }, () => recordId());
   const opened = await push(
     lotIds.map((id, i) =>
       op('lot.open', {
@@ -129,7 +131,7 @@ async function pushBodies(
           load: Math.round(prepared.expected.low.load * (1 + jitter() * 3)),
         };
         const record = op('inspection.record', {
-          id: randomUUID(),
+          id: recordId(),
           lotId,
           sampleIndex: i + 1,
           measurements,

@@ -1,4 +1,5 @@
 import { db, type OutboxOp } from './db';
+import { recordId } from './recordId';
 
 export interface NewOperation {
   type: string;
@@ -14,7 +15,7 @@ export interface NewOperation {
 export async function enqueue(operation: NewOperation): Promise<OutboxOp> {
   const op: OutboxOp = {
     ...operation,
-    opId: crypto.randomUUID(),
+    opId: recordId(),
     state: 'waiting',
     createdAt: new Date().toISOString(),
   };

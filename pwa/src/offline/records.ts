@@ -13,6 +13,7 @@ import type { PartVerdict } from '../engine/index';
 import { toWireVerdict } from '../inspect/deviceVerdict';
 import { db, type StoredPhoto } from './db';
 import { enqueue } from './outbox';
+import { recordId } from './recordId';
 
 export interface LocalLot {
   id: string;
@@ -66,7 +67,7 @@ export type NewLot = Pick<
 export async function openLot(input: NewLot, authorId: string): Promise<LocalLot> {
   const lot: LocalLot = {
     ...input,
-    id: crypto.randomUUID(),
+    id: recordId(),
     openedBy: authorId,
     openedAt: new Date().toISOString(),
     status: 'open',
@@ -92,7 +93,7 @@ export type NewPart = Pick<
 export async function recordPart(input: NewPart, authorId: string): Promise<LocalPart> {
   const part: LocalPart = {
     ...input,
-    id: crypto.randomUUID(),
+    id: recordId(),
     authorId,
     recordedAt: new Date().toISOString(),
   };
@@ -131,7 +132,7 @@ export async function recordDefect(
 ): Promise<LocalDefect> {
   const defect: LocalDefect = {
     ...input,
-    id: crypto.randomUUID(),
+    id: recordId(),
     photoSha256: photo?.sha256,
     authorId,
     recordedAt: new Date().toISOString(),
