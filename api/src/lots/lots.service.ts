@@ -135,6 +135,8 @@ export class LotsService {
     await this.feed.publish(manager, 'lot', lot.id, lot);
     ctx.batch.audit.push(auditRow(ctx, 'lot.open', 'lot', lot.id, null, lot));
     ctx.batch.lots.set(lot.id, lot);
+    // A lot made just now has no records yet: its records in this batch need not look for any.
+    ctx.batch.samples.set(lot.id, new Map());
     return lot.id;
   }
 
