@@ -39,10 +39,7 @@ export class FitsService {
     const data = ordered.flatMap((set) =>
       set.points.map((point) => ({ mode: set.mode, ...point })),
     );
-    // Only the modes sent: the DTO instance also holds the others, as undefined.
-    const weights = dto.weights
-      ? Object.fromEntries(Object.entries(dto.weights).filter(([, w]) => w !== undefined))
-      : null;
+    const weights = dto.weights ?? null;
     const { model, ...result } = fitModel({
       model: dto.model as MaterialModel,
       data,
