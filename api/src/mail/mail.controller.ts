@@ -1,5 +1,4 @@
 import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
-import { DataSource } from 'typeorm';
 import { Roles, type AuthUser } from '../auth/access.js';
 import { CurrentUser } from '../auth/current-user.decorator.js';
 import { TestMailDto } from './dto/test-mail.dto.js';
@@ -8,10 +7,7 @@ import { MailService, type KeptMessage, type MailSettings } from './mail.service
 @Controller('admin/mail')
 @Roles('admin')
 export class MailController {
-  constructor(
-    private readonly mail: MailService,
-    private readonly dataSource: DataSource,
-  ) {}
+  constructor(private readonly mail: MailService) {}
 
   @Get()
   list(): Promise<KeptMessage[]> {
@@ -20,7 +16,7 @@ export class MailController {
 
   @Get('settings')
   settings(): Promise<MailSettings> {
-    return this.mail.settings(this.dataSource.manager);
+    return this.mail.settings();
   }
 
   /** Sends one message now; its outcome shows in the queue counts (and, locally, in the list). */

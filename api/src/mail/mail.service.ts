@@ -11,7 +11,7 @@ import {
 } from '@nestjs/common';
 import { simpleParser } from 'mailparser';
 import nodemailer, { type Transporter } from 'nodemailer';
-import { IsNull, LessThan, MoreThanOrEqual, Not, type EntityManager } from 'typeorm';
+import { DataSource, IsNull, LessThan, MoreThanOrEqual, Not, type EntityManager } from 'typeorm';
 import { AuditService } from '../audit/audit.service.js';
 import { CONFIG, type Config } from '../config.js';
 import { Transactions } from '../database/transactions.js';
@@ -60,6 +60,7 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
     @Inject(CONFIG) private readonly config: Config,
     private readonly transactions: Transactions,
     private readonly audit: AuditService,
+    private readonly dataSource: DataSource,
   ) {}
 
   async onModuleInit(): Promise<void> {
@@ -154,7 +155,8 @@ export class MailService implements OnModuleInit, OnApplicationBootstrap, OnModu
     }
   }
 
-  async settings(manager: EntityManager): Promise<MailSettings> {
+  async settings(): Promise<MailSettings> {
+    const { manager } = this.dataSource;
     const [supervisors, sent, waiting, failed] = await Promise.all([
       manager.find(User, {
         select: { email: true },
