@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { fitModel, type FitPoint } from '../src/engine.js';
-import { rows, signIn, startApp, type Harness } from './harness.js';
+import { requestsOf, rows, signIn, startApp, type Harness } from './harness.js';
+import { planar, uniaxial } from './lab-readings.js';
 
 let h: Harness;
 let quality: string;
@@ -15,29 +16,13 @@ beforeAll(async () => {
 });
 afterAll(() => h.close());
 
-const as = (token: string) => ({
-  get: (path: string) => h.http().get(path).auth(token, { type: 'bearer' }),
-  post: (path: string, body?: object) =>
-    h.http().post(path).auth(token, { type: 'bearer' }).send(body),
-  patch: (path: string, body: object) =>
-    h.http().patch(path).auth(token, { type: 'bearer' }).send(body),
-});
-
-// Invented lab readings, as in desk.e2e-spec: not Mooney–Rivlin, so the weights matter.
-const uniaxial = [1.1, 1.3, 1.5, 1.8, 2.1, 2.5].map((stretch) => ({
-  stretch,
-  stress: Number((0.6 * (stretch - stretch ** -2) * (1 + 0.1 / stretch)).toFixed(4)),
-}));
-const planar = [1.1, 1.3, 1.6, 2.0].map((stretch) => ({
-  stretch,
-  stress: Number((0.66 * (stretch - stretch ** -3)).toFixed(4)),
-}));
+const by = (token: string) => requestsOf(h, token);
 
 let code = 0;
 async function compound(extra: object = {}) {
   code += 1;
   return (
-    await as(quality)
+    await by(quality)
       .post('/api/compounds', {
         code: `DESK-${code}`,
         name: `Desk compound ${code}`,
@@ -50,7 +35,7 @@ async function compound(extra: object = {}) {
 }
 
 async function fitted(compoundId: string, weights?: object) {
-  const q = as(quality);
+  const q = by(quality);
   const sets: string[] = [];
   for (const [mode, points] of [
     ['uniaxial', uniaxial],
@@ -104,17 +89,17 @@ describe('fits: weights and publish note', () => {
       unweighted.rmsByMode.planar! + 1e-12,
     );
 
-    const detail = await as(quality).get(`/api/compounds/${c.id}`).expect(200);
+    const detail = await by(quality).get(`/api/compounds/${c.id}`).expect(200);
     expect(detail.body.fits.map((f: { weights: unknown }) => f.weights)).toEqual([weights, null]);
   });
 
   test('a zero weight is a 400 naming it, and nothing is written', async () => {
     const c = await compound();
-    const set = await as(quality)
+    const set = await by(quality)
       .post(`/api/compounds/${c.id}/test-sets`, { name: 'u', mode: 'uniaxial', points: uniaxial })
       .expect(201);
     const before = await rows(h, 'compound_fits');
-    const res = await as(quality)
+    const res = await by(quality)
       .post(`/api/compounds/${c.id}/fits`, {
         model: { kind: 'neo-hookean', c10: 0.3 },
         testSetIds: [set.body.id],
@@ -131,7 +116,7 @@ describe('fits: weights and publish note', () => {
     const fit = await fitted(c.id);
     expect(fit).toMatchObject({ createdBy: qualityId, note: null, publishedBy: null });
     expect(Number.isNaN(Date.parse(fit.createdAt))).toBe(false);
-    const published = await as(quality)
+    const published = await by(quality)
       .post(`/api/compounds/${c.id}/fits/${fit.id}/publish`, { note: 'Planar data added' })
       .expect(200);
     expect(published.body.currentFit).toMatchObject({
@@ -141,12 +126,12 @@ describe('fits: weights and publish note', () => {
       publishedBy: qualityId,
       createdBy: qualityId,
     });
-    const detail = await as(inspector).get(`/api/compounds/${c.id}`).expect(200);
+    const detail = await by(inspector).get(`/api/compounds/${c.id}`).expect(200);
     expect(detail.body.fits[0]).toMatchObject({
       note: 'Planar data added',
       publishedBy: qualityId,
     });
-    const pulled = await as(inspector).get('/api/sync/pull?since=0&limit=1000').expect(200);
+    const pulled = await by(inspector).get('/api/sync/pull?since=0&limit=1000').expect(200);
     const feedFit = pulled.body.changes.find(
       (ch: { kind: string; id: string }) => ch.kind === 'fit' && ch.id === fit.id,
     );
@@ -157,19 +142,19 @@ describe('fits: weights and publish note', () => {
     const c = await compound();
     const fit = await fitted(c.id);
     for (const note of ['', 'x'.repeat(1001), null]) {
-      const res = await as(quality)
+      const res = await by(quality)
         .post(`/api/compounds/${c.id}/fits/${fit.id}/publish`, { note })
         .expect(400);
       expect(res.body.field).toBe('note');
     }
-    const detail = await as(quality).get(`/api/compounds/${c.id}`).expect(200);
+    const detail = await by(quality).get(`/api/compounds/${c.id}`).expect(200);
     expect(detail.body).toMatchObject({ currentFitId: null, fits: [{ status: 'draft' }] });
   });
 });
 
 describe('specs: set condition, note, and the compound K frozen at release', () => {
   async function releasedFor(compoundId: string) {
-    const q = as(quality);
+    const q = by(quality);
     const fit = await fitted(compoundId);
     await q.post(`/api/compounds/${compoundId}/fits/${fit.id}/publish`).expect(200);
     const spec = await q
@@ -201,7 +186,7 @@ describe('specs: set condition, note, and the compound K frozen at release', () 
     const { body, release, specId } = await releasedFor(c.id);
     expect(release.body).toEqual({ ...body, bulkModulusMPa: 1800 });
     expect(release.partSpec).toMatchObject({ bulkModulusMPa: 1800, note: body.note });
-    const detail = await as(inspector).get(`/api/specs/${specId}`).expect(200);
+    const detail = await by(inspector).get(`/api/specs/${specId}`).expect(200);
     expect(detail.body.revisions[0].body.bulkModulusMPa).toBe(1800);
   });
 
@@ -214,10 +199,10 @@ describe('specs: set condition, note, and the compound K frozen at release', () 
 
   test('bulkModulusMPa is the server’s to set: a client sending it gets a 400', async () => {
     const c = await compound();
-    const spec = await as(quality)
+    const spec = await by(quality)
       .post('/api/specs', { partNumber: `DESK-K-${randomUUID().slice(0, 8)}`, name: 'Pad' })
       .expect(201);
-    const res = await as(quality)
+    const res = await by(quality)
       .post(`/api/specs/${spec.body.id}/revisions`, {
         geometry: { shape: 'disc', diameter: 60, thickness: 10 },
         bonded: true,
@@ -242,7 +227,7 @@ describe('compounds: notes and PATCH', () => {
 
   test('PATCH changes the given fields, is audited with before and after, and reaches tablets', async () => {
     const c = await compound({ notes: 'first' });
-    const res = await as(quality)
+    const res = await by(quality)
       .patch(`/api/compounds/${c.id}`, { name: 'Renamed', bulkModulusMPa: 2200, notes: 'second' })
       .expect(200);
     expect(res.body).toMatchObject({
@@ -255,14 +240,14 @@ describe('compounds: notes and PATCH', () => {
       notes: 'second',
       currentFit: null,
     });
-    const log = await as(quality).get(`/api/audit?entity=compound&entityId=${c.id}`).expect(200);
+    const log = await by(quality).get(`/api/audit?entity=compound&entityId=${c.id}`).expect(200);
     expect(log.body[0]).toMatchObject({
       action: 'compound.update',
       actorId: qualityId,
       before: { name: `Desk compound ${code}`, notes: 'first', bulkModulusMPa: null },
       after: { name: 'Renamed', notes: 'second', bulkModulusMPa: 2200 },
     });
-    const pulled = await as(inspector).get('/api/sync/pull?since=0&limit=1000').expect(200);
+    const pulled = await by(inspector).get('/api/sync/pull?since=0&limit=1000').expect(200);
     const latest = pulled.body.changes.filter(
       (ch: { kind: string; id: string }) => ch.kind === 'compound' && ch.id === c.id,
     );
@@ -272,10 +257,10 @@ describe('compounds: notes and PATCH', () => {
   test('the code stays fixed; an unknown compound is a 404; nothing is written', async () => {
     const c = await compound();
     const before = await rows(h, 'audit_log');
-    const res = await as(quality).patch(`/api/compounds/${c.id}`, { code: 'NEW' }).expect(400);
+    const res = await by(quality).patch(`/api/compounds/${c.id}`, { code: 'NEW' }).expect(400);
     expect(res.body.field).toBe('code');
-    await as(quality).patch(`/api/compounds/${randomUUID()}`, { name: 'x' }).expect(404);
-    await as(quality)
+    await by(quality).patch(`/api/compounds/${randomUUID()}`, { name: 'x' }).expect(404);
+    await by(quality)
       .patch(`/api/compounds/${c.id}`, { notes: 'x'.repeat(2001) })
       .expect(400);
     expect(await rows(h, 'audit_log')).toBe(before);
@@ -292,7 +277,7 @@ describe('compression-set aging sets', () => {
 
   test('a set is kept and listed newest first', async () => {
     const c = await compound();
-    const first = await as(quality)
+    const first = await by(quality)
       .post(`/api/compounds/${c.id}/aging`, { name: 'First', thresholdPercent: 40, points })
       .expect(201);
     expect(first.body).toMatchObject({
@@ -302,23 +287,23 @@ describe('compression-set aging sets', () => {
       points,
       createdBy: qualityId,
     });
-    const second = await as(quality)
+    const second = await by(quality)
       .post(`/api/compounds/${c.id}/aging`, {
         name: 'Second',
         thresholdPercent: 50,
         points: [...points, { temperatureC: 150, hours: 60 }],
       })
       .expect(201);
-    const list = await as(inspector).get(`/api/compounds/${c.id}/aging`).expect(200);
+    const list = await by(inspector).get(`/api/compounds/${c.id}/aging`).expect(200);
     expect(list.body.map((s: { id: string }) => s.id)).toEqual([second.body.id, first.body.id]);
-    const log = await as(quality).get(`/api/audit?entity=compound&entityId=${c.id}`).expect(200);
+    const log = await by(quality).get(`/api/audit?entity=compound&entityId=${c.id}`).expect(200);
     expect(log.body[0]).toMatchObject({ action: 'compound.aging', after: { name: 'Second' } });
   });
 
   test('points the Arrhenius fit refuses are a 422 with its field and reason; nothing is written', async () => {
     const c = await compound();
     const before = await rows(h, 'compound_aging_sets');
-    const twoTemperatures = await as(quality)
+    const twoTemperatures = await by(quality)
       .post(`/api/compounds/${c.id}/aging`, {
         name: 'Two temperatures',
         thresholdPercent: 40,
@@ -327,7 +312,7 @@ describe('compression-set aging sets', () => {
       .expect(422);
     expect(twoTemperatures.body).toMatchObject({ field: 'points' });
     expect(twoTemperatures.body.reason).toMatch(/three or more different temperatures/);
-    const rising = await as(quality)
+    const rising = await by(quality)
       .post(`/api/compounds/${c.id}/aging`, {
         name: 'Rising',
         thresholdPercent: 40,
@@ -340,8 +325,8 @@ describe('compression-set aging sets', () => {
 
   test('an unknown compound is a 404 for reading and writing', async () => {
     const id = randomUUID();
-    await as(quality).get(`/api/compounds/${id}/aging`).expect(404);
-    await as(quality)
+    await by(quality).get(`/api/compounds/${id}/aging`).expect(404);
+    await by(quality)
       .post(`/api/compounds/${id}/aging`, { name: 'x', thresholdPercent: 40, points })
       .expect(404);
   });

@@ -1,4 +1,5 @@
-import { signIn, startApp, type Harness } from './harness.js';
+import { requestsOf, signIn, startApp, type Harness } from './harness.js';
+import { planar, uniaxial } from './lab-readings.js';
 import { lotOpen, part, released, tablet } from './ops.js';
 
 let h: Harness;
@@ -11,26 +12,10 @@ beforeAll(async () => {
 });
 afterAll(() => h.close());
 
-const as = (token: string) => ({
-  get: (path: string) => h.http().get(path).auth(token, { type: 'bearer' }),
-  post: (path: string, body?: object) =>
-    h.http().post(path).auth(token, { type: 'bearer' }).send(body),
-  put: (path: string, body: object) =>
-    h.http().put(path).auth(token, { type: 'bearer' }).send(body),
-});
-
-// Invented lab readings: a soft compound, uniaxial and planar.
-const uniaxial = [1.1, 1.3, 1.5, 1.8, 2.1, 2.5].map((stretch) => ({
-  stretch,
-  stress: Number((0.6 * (stretch - stretch ** -2) * (1 + 0.1 / stretch)).toFixed(4)),
-}));
-const planar = [1.1, 1.3, 1.6, 2.0].map((stretch) => ({
-  stretch,
-  stress: Number((0.66 * (stretch - stretch ** -3)).toFixed(4)),
-}));
+const by = (token: string) => requestsOf(h, token);
 
 test('a compound is fitted by the engine, published, and a spec released against it is frozen', async () => {
-  const q = as(quality);
+  const q = by(quality);
   const compound = await q
     .post('/api/compounds', {
       code: 'TEST-50',
@@ -100,7 +85,7 @@ test('a compound is fitted by the engine, published, and a spec released against
 });
 
 test('a geometry the engine refuses is a 422 naming the field; a deflection past the thickness a 400', async () => {
-  const q = as(quality);
+  const q = by(quality);
   const [compound] = (await q.get('/api/compounds').expect(200)).body;
   const spec = await q
     .post('/api/specs', { partNumber: 'TEST-RING-1', name: 'Test ring' })
@@ -131,7 +116,7 @@ test('review queue, disposition, reopen, and the lot report as JSON and CSV', as
   const r = await released(h, t.token, 'GS-3070');
   const { lotId, op } = lotOpen(t, r, 10);
   await t.push([op, part(t, r, lotId, 1), part(t, r, lotId, 2, 1.8)]);
-  const s = as(supervisor);
+  const s = by(supervisor);
   const queue = await s.get('/api/lots?flagged=true').expect(200);
   expect(queue.body.map((l: { id: string }) => l.id)).toContain(lotId);
 
@@ -172,7 +157,7 @@ test('review queue, disposition, reopen, and the lot report as JSON and CSV', as
 });
 
 test('every write is audited with before and after; admins and quality read it', async () => {
-  const admin = as((await signIn(h, 'admin@demo.test')).accessToken);
+  const admin = by((await signIn(h, 'admin@demo.test')).accessToken);
   const made = await admin
     .post('/api/users', {
       email: 'audit-me@demo.test',
@@ -187,7 +172,7 @@ test('every write is audited with before and after; admins and quality read it',
     .auth((await signIn(h, 'admin@demo.test')).accessToken, { type: 'bearer' })
     .send({ role: 'supervisor' })
     .expect(200);
-  const log = await as(quality).get(`/api/audit?entity=user&entityId=${made.body.id}`).expect(200);
+  const log = await by(quality).get(`/api/audit?entity=user&entityId=${made.body.id}`).expect(200);
   expect(log.body.map((e: { action: string }) => e.action)).toEqual(['user.role', 'user.create']);
   expect(log.body[0]).toMatchObject({
     before: { role: 'inspector' },
@@ -197,7 +182,7 @@ test('every write is audited with before and after; admins and quality read it',
 });
 
 test('a duplicate key is a 409 naming the field, not a 500', async () => {
-  const admin = as((await signIn(h, 'admin@demo.test')).accessToken);
+  const admin = by((await signIn(h, 'admin@demo.test')).accessToken);
   const press = await admin
     .post('/api/presses', { code: 'P1', name: 'Again', kind: 'compression' })
     .expect(409);

@@ -101,3 +101,16 @@ export async function signIn(
     throw new Error(`sign-in of ${email} gave ${res.status} ${JSON.stringify(res.body)}`);
   return res.body;
 }
+
+/** Requests made with one signed-in person's token. */
+export function requestsOf(h: Harness, token: string) {
+  return {
+    get: (path: string) => h.http().get(path).auth(token, { type: 'bearer' }),
+    post: (path: string, body?: object) =>
+      h.http().post(path).auth(token, { type: 'bearer' }).send(body),
+    put: (path: string, body: object) =>
+      h.http().put(path).auth(token, { type: 'bearer' }).send(body),
+    patch: (path: string, body: object) =>
+      h.http().patch(path).auth(token, { type: 'bearer' }).send(body),
+  };
+}
